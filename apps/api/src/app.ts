@@ -1,0 +1,51 @@
+import express, { type Express } from 'express';
+import cookieParser from 'cookie-parser';
+import { existsSync } from 'node:fs';
+import path from 'node:path';
+import type { Sequelize } from 'sequelize';
+import type { Config } from './config';
+import { AppError } from './errors/app-error';
+import { errorMiddleware } from './errors/handle-error';
+import { requireUser } from './middleware/auth';
+import { authRoutes } from './routes/auth-routes';
+import { missionRoutes } from './routes/mission-routes';
+import { publicRoutes } from './routes/public-routes';
+import { userRoutes } from './routes/user-routes';
+
+/** Version reported by `/api/health`. */
+export const API_VERSION = '0.1.0';
+
+/** Builds the Express application; the caller owns the database connection and the listener. */
+export function createApp(config: Config, sequelize: Sequelize): Express {
+  const app = express();
+  app.disable('x-powered-by');
+  app.set('trust proxy', 'loopback');
+
+  const api = express.Router();
+  api.use(express.json({ limit: '1mb' }));
+  api.use(cookieParser());
+  api.use(publicRoutes(config, sequelize, API_VERSION));
+  api.use(authRoutes(config));
+  api.use(requireUser(config.PL_JWT_SECRET));
+  api.use(missionRoutes());
+  api.use(userRoutes());
+  api.use((req) => {
+    throw new AppError('not_found', `no API route ${req.method} /api${req.path}`);
+  });
+  api.use(errorMiddleware);
+  app.use('/api', api);
+
+  if (config.PL_WEB_DIST) serveWebClient(app, config.PL_WEB_DIST);
+  return app;
+}
+
+/** Serves the built web client, with index.html for every client-side route. */
+function serveWebClient(app: Express, distDir: string): void {
+  const indexHtml = path.resolve(distDir, 'index.html');
+  if (!existsSync(indexHtml)) throw new Error(`PL_WEB_DIST=${distDir} has no index.html: build the web app first`);
+  app.use(express.static(distDir, { index: false, maxAge: '1h', immutable: false }));
+  app.get('/*splat', (_req, res) => {
+    res.setHeader('Cache-Control', 'no-cache');
+    res.sendFile(indexHtml);
+  });
+}

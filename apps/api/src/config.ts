@@ -1,0 +1,42 @@
+import { z } from 'zod';
+
+const flag = z
+  .enum(['0', '1', 'true', 'false'])
+  .transform((v) => v === '1' || v === 'true');
+
+/** Environment variables read at start-up; every one is validated here and nowhere else. */
+export const configSchema = z.object({
+  /** PostgreSQL connection URL of the application database. */
+  PL_DATABASE_URL: z.url({ message: 'PL_DATABASE_URL must be a postgres:// URL' }),
+  /** Secret that signs session tokens; at least 32 characters. */
+  PL_JWT_SECRET: z.string().min(32, 'PL_JWT_SECRET must have at least 32 characters'),
+  /** Interface the HTTP server binds to. */
+  PL_HOST: z.string().default('127.0.0.1'),
+  /** TCP port of the HTTP server; 0 picks a free one. */
+  PL_PORT: z.coerce.number().int().min(0).max(65535).default(8787),
+  /** Session lifetime in hours (cookie and token expiry). */
+  PL_SESSION_HOURS: z.coerce.number().positive().max(24 * 30).default(12),
+  /** Mark the session cookie Secure (set behind HTTPS). */
+  PL_COOKIE_SECURE: flag.default(false),
+  /** Demo mode lists the demo accounts on the sign-in page. Never in production. */
+  PL_DEMO_MODE: flag.default(false),
+  /** Sign-in attempts allowed per client address per window. */
+  PL_LOGIN_LIMIT: z.coerce.number().int().positive().default(10),
+  /** Length of the sign-in rate-limit window in seconds. */
+  PL_LOGIN_WINDOW_S: z.coerce.number().int().positive().default(15 * 60),
+  /** Built web client to serve beside the API (a folder with index.html), if any. */
+  PL_WEB_DIST: z.string().optional(),
+  /** Job workers to run inside the API process (0 when separate worker processes run). */
+  PL_WORKERS_IN_PROCESS: z.coerce.number().int().min(0).max(64).default(1),
+});
+export type Config = z.infer<typeof configSchema>;
+
+/** Reads and validates the configuration; throws a message naming every bad variable. */
+export function loadConfig(env: NodeJS.ProcessEnv = process.env): Config {
+  const parsed = configSchema.safeParse(env);
+  if (!parsed.success) {
+    const lines = parsed.error.issues.map((i) => `  ${i.path.join('.')}: ${i.message}`);
+    throw new Error(`invalid configuration:\n${lines.join('\n')}`);
+  }
+  return parsed.data;
+}

@@ -1,0 +1,10 @@
+export { SOLAR_CONSTANT, ASTRONOMICAL_UNIT, SPEED_OF_LIGHT } from './constants';
+export { SrpError, srpErrorCodes } from './errors';
+export type { SrpErrorCode, SrpErrorDetails } from './errors';
+export { createVec3 } from './math/vec3';
+export type { Vec3, ReadonlyVec3 } from './math/vec3';
+export { irradianceAt, radiationPressureAt } from './radiation/flux';
+export { checkSurfaceOptics, OPTICS_SUM_TOLERANCE } from './vehicles/surface-optics';
+export type { SurfaceOptics } from './vehicles/surface-optics';
+export { createFlatPlate, flatPlateForce } from './vehicles/flat-plate';
+export type { FlatPlate, FlatPlateSpec } from './vehicles/flat-plate';
