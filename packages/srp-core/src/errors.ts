@@ -17,7 +17,7 @@ export interface SrpErrorDetails {
   field: string;
   /** The value that was refused. */
   value: unknown;
-  /** The bound or rule the value broke, when there is one (`> 0`, `[0, 1]`, `sum = 1 ± 1e-9`). */
+  /** The bound or rule the value broke, when there is one (`> 0`, `[0, 1]`, `1 ± 1e-9`). */
   limit?: number | string;
 }
 

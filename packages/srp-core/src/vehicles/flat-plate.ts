@@ -79,7 +79,7 @@ const UNIT_TOLERANCE = 1e-6;
  * @param satToSun unit vector from the spacecraft to the Sun, same frame as `plate.normal`
  * @param pressure radiation pressure at the spacecraft (N/m² = Pa), ≥ 0, e.g. `radiationPressureAt`
  * @returns force (N), `out`
- * @throws SrpError `invalid_input` naming `pressure` or `satToSun`
+ * @throws SrpError naming `pressure` (`invalid_input`, `out_of_range`) or `satToSun` (`invalid_input`)
  */
 export function flatPlateForce(
   out: Vec3,
@@ -89,7 +89,7 @@ export function flatPlateForce(
 ): Vec3 {
   if (!(pressure >= 0 && pressure < Infinity)) {
     throw new SrpError(
-      'invalid_input',
+      Number.isFinite(pressure) ? 'out_of_range' : 'invalid_input',
       `pressure must be a finite number (Pa) >= 0; got ${pressure}`,
       { field: 'pressure', value: pressure, limit: '>= 0' },
     );
