@@ -19,7 +19,8 @@ export const API_VERSION = '0.1.0';
 export function createApp(config: Config, sequelize: Sequelize): Express {
   const app = express();
   app.disable('x-powered-by');
-  app.set('trust proxy', 'loopback');
+  // Behind a reverse proxy the client address (used by the sign-in rate limit) comes from X-Forwarded-For.
+  app.set('trust proxy', /^\d+$/.test(config.PL_TRUST_PROXY) ? Number(config.PL_TRUST_PROXY) : config.PL_TRUST_PROXY);
 
   const api = express.Router();
   api.use(express.json({ limit: '1mb' }));

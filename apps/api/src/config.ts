@@ -28,12 +28,23 @@ export const configSchema = z.object({
   PL_WEB_DIST: z.string().optional(),
   /** Job workers to run inside the API process (0 when separate worker processes run). */
   PL_WORKERS_IN_PROCESS: z.coerce.number().int().min(0).max(64).default(1),
+  /** Express `trust proxy`: which proxies may set X-Forwarded-For (e.g. `loopback`, `uniquelocal`, a hop count). */
+  PL_TRUST_PROXY: z.string().default('loopback'),
+  /** Jobs a separate worker process runs at once. */
+  PL_WORKER_CONCURRENCY: z.coerce.number().int().min(1).max(64).default(1),
 });
 export type Config = z.infer<typeof configSchema>;
 
+/** What a separate worker process needs: the database and its concurrency, no HTTP secrets. */
+export const workerConfigSchema = configSchema.pick({ PL_DATABASE_URL: true, PL_WORKER_CONCURRENCY: true });
+export type WorkerConfig = z.infer<typeof workerConfigSchema>;
+
 /** Reads and validates the configuration; throws a message naming every bad variable. */
-export function loadConfig(env: NodeJS.ProcessEnv = process.env): Config {
-  const parsed = configSchema.safeParse(env);
+export function loadConfig<S extends z.ZodType = typeof configSchema>(
+  env: NodeJS.ProcessEnv = process.env,
+  schema: S = configSchema as unknown as S,
+): z.infer<S> {
+  const parsed = schema.safeParse(env);
   if (!parsed.success) {
     const lines = parsed.error.issues.map((i) => `  ${i.path.join('.')}: ${i.message}`);
     throw new Error(`invalid configuration:\n${lines.join('\n')}`);

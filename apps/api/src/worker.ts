@@ -1,6 +1,6 @@
 import type PgBoss from 'pg-boss';
 import { fileURLToPath } from 'node:url';
-import { loadConfig } from './config';
+import { loadConfig, workerConfigSchema } from './config';
 import { installProcessHandlers } from './errors/handle-error';
 import { openQueue } from './jobs/queue';
 import { jobDefinitions } from './jobs';
@@ -24,8 +24,8 @@ export async function startWorker(databaseUrl: string, concurrency: number): Pro
 // Run as a process of its own: `tsx src/worker.ts` (any number, on any machine that reaches the database).
 if (process.argv[1] === fileURLToPath(import.meta.url)) {
   installProcessHandlers('worker');
-  const config = loadConfig();
-  const worker = await startWorker(config.PL_DATABASE_URL, Math.max(1, config.PL_WORKERS_IN_PROCESS));
+  const config = loadConfig(process.env, workerConfigSchema);
+  const worker = await startWorker(config.PL_DATABASE_URL, config.PL_WORKER_CONCURRENCY);
   console.log(`worker ready (job types: ${jobDefinitions.map((j) => j.queue).join(', ') || 'none yet'})`);
   const stop = async () => {
     await worker.stop();

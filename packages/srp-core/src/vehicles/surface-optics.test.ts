@@ -14,8 +14,8 @@ function thrown(act: () => unknown): SrpError {
 
 describe('checkSurfaceOptics', () => {
   it('accepts decimal fractions whose sum rounds away from exactly 1', () => {
-    // 0.1 + 0.2 + 0.7 is 0.9999999999999999 in doubles: within the 1e-9 tolerance
-    const optics = { absorbed: 0.1, specular: 0.2, diffuse: 0.7 };
+    // 0.7 + 0.2 + 0.1 is 0.9999999999999999 in doubles: within the 1e-9 tolerance
+    const optics = { absorbed: 0.7, specular: 0.2, diffuse: 0.1 };
     expect(checkSurfaceOptics(optics)).toBe(optics);
   });
 

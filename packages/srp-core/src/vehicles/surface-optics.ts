@@ -15,7 +15,8 @@ export interface SurfaceOptics {
 
 /**
  * Allowed deviation of absorbed + specular + diffuse from 1: room for the rounding of decimal
- * inputs such as 0.1 + 0.2 + 0.7, far below any measured coating property.
+ * inputs (0.7 + 0.2 + 0.1 is 0.9999999999999999 in doubles), far below any measured coating
+ * property.
  */
 export const OPTICS_SUM_TOLERANCE = 1e-9;
 
