@@ -32,9 +32,10 @@ const install = spawnSync(pnpm, ['install', '--frozen-lockfile', '--reporter=app
 });
 if (install.status !== 0) process.exit(install.status ?? 1);
 
-const tsx = path.join(root, 'node_modules', '.bin', 'tsx');
+// `node --import tsx` rather than the tsx CLI: the CLI's signal relay kills a child that is busy
+// (stopping PostgreSQL, say) when a second Ctrl-C arrives.
 const stack = path.join(root, 'apps', 'api', 'scripts', 'stack.ts');
-const child = spawn(tsx, [stack, ...process.argv.slice(2)], {
+const child = spawn(process.execPath, ['--import', 'tsx', stack, ...process.argv.slice(2)], {
   cwd: root,
   stdio: 'inherit',
   env: { ...process.env, PL_PNPM: pnpm },

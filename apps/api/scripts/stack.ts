@@ -26,7 +26,8 @@ const root = path.resolve(path.dirname(fileURLToPath(import.meta.url)), '../../.
 const apiDir = path.join(root, 'apps', 'api');
 const webDist = path.join(root, 'apps', 'web', 'dist');
 const pnpm = process.env.PL_PNPM ?? 'pnpm';
-const tsx = path.join(root, 'node_modules', '.bin', 'tsx');
+/** Runs a TypeScript entry point with Node and the tsx loader (no wrapper process in between). */
+const tsNode = (entry: string): [string, string[]] => [process.execPath, ['--import', 'tsx', entry]];
 
 /** Runs a step in the foreground; returns its exit code. */
 function step(title: string, cmd: string, args: string[], env: NodeJS.ProcessEnv = process.env, cwd = root): number {
@@ -119,11 +120,11 @@ async function start(): Promise<void> {
       PL_WEB_DIST: webDist,
       PL_WORKERS_IN_PROCESS: process.env.PL_WORKERS_IN_PROCESS ?? '1',
     };
-    mustStep('migrate', tsx, [path.join(apiDir, 'src/cli/migrate.ts')], env);
-    mustStep('demo data', tsx, [path.join(apiDir, 'src/cli/seed.ts')], env);
+    mustStep('migrate', ...tsNode(path.join(apiDir, 'src/cli/migrate.ts')), env);
+    mustStep('demo data', ...tsNode(path.join(apiDir, 'src/cli/seed.ts')), env);
     mustStep('build web client', pnpm, ['--filter', '@photon-ledger/web', 'build']);
 
-    server = spawn(tsx, [path.join(apiDir, 'src/server.ts')], { cwd: apiDir, env, stdio: ['ignore', 'pipe', 'inherit'] });
+    server = spawn(...tsNode(path.join(apiDir, 'src/server.ts')), { cwd: apiDir, env, stdio: ['ignore', 'pipe', 'inherit'] });
     server.stdout!.on('data', (chunk: Buffer) => {
       process.stdout.write(chunk);
       if (chunk.toString().includes('listening on')) {

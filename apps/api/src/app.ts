@@ -45,7 +45,8 @@ function serveWebClient(app: Express, distDir: string): void {
   const indexHtml = path.resolve(distDir, 'index.html');
   if (!existsSync(indexHtml)) throw new Error(`PL_WEB_DIST=${distDir} has no index.html: build the web app first`);
   app.use(express.static(distDir, { index: false, maxAge: '1h', immutable: false }));
-  app.get('/*splat', (_req, res) => {
+  // '/{*splat}' also matches '/' itself, which '/*splat' does not.
+  app.get('/{*splat}', (_req, res) => {
     res.setHeader('Cache-Control', 'no-cache');
     res.sendFile(indexHtml);
   });

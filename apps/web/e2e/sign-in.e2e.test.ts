@@ -33,7 +33,7 @@ describe('signing in as the engineer', () => {
 
   it('shows the two demo missions after sign-in, with no request leaving the machine', async () => {
     const baseUrl = inject('baseUrl');
-    await page.goto(`${baseUrl}/missions`);
+    await page.goto(`${baseUrl}/`);
     // Not signed in yet: the client sends us to the sign-in page.
     await page.getByRole('heading', { name: 'Sign in to Photon Ledger' }).waitFor();
     await page.screenshot({ path: path.join(artifactsDir, 'sign-in.png'), fullPage: true });
