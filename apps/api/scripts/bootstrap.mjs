@@ -42,5 +42,5 @@ const child = spawn(process.execPath, ['--import', 'tsx', stack, ...process.argv
 });
 // Ctrl-C reaches the whole process group; a signal sent to this process alone is passed on.
 // The stack script shuts down once however many copies of a signal it gets.
-for (const signal of ['SIGINT', 'SIGTERM']) process.on(signal, () => child.kill(signal));
+for (const signal of ['SIGINT', 'SIGTERM', 'SIGHUP']) process.on(signal, () => child.kill(signal));
 child.on('exit', (code, signal) => process.exit(code ?? (signal ? 1 : 0)));

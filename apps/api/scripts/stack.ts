@@ -104,7 +104,7 @@ async function start(): Promise<void> {
     cluster.stop();
     console.log('stopped: API, worker and PostgreSQL');
   });
-  for (const signal of ['SIGINT', 'SIGTERM'] as const) {
+  for (const signal of ['SIGINT', 'SIGTERM', 'SIGHUP'] as const) {
     process.on(signal, () => void shutdown().then(() => process.exit(0)));
   }
 
@@ -153,7 +153,7 @@ async function test(extraArgs: string[]): Promise<number> {
     cluster.stop();
     rmSync(baseDir, { recursive: true, force: true });
   });
-  for (const signal of ['SIGINT', 'SIGTERM'] as const) {
+  for (const signal of ['SIGINT', 'SIGTERM', 'SIGHUP'] as const) {
     process.on(signal, () => void cleanup().then(() => process.exit(130)));
   }
   try {
