@@ -37,10 +37,27 @@ if (install.status !== 0) process.exit(install.status ?? 1);
 const stack = path.join(root, 'apps', 'api', 'scripts', 'stack.ts');
 const child = spawn(process.execPath, ['--import', 'tsx', stack, ...process.argv.slice(2)], {
   cwd: root,
-  stdio: 'inherit',
+  // No terminal on stdin: nothing reads it, and a terminal there can trip Node's exit-time reset.
+  stdio: ['ignore', 'inherit', 'inherit'],
   env: { ...process.env, PL_PNPM: pnpm },
 });
 // Ctrl-C reaches the whole process group; a signal sent to this process alone is passed on.
 // The stack script shuts down once however many copies of a signal it gets.
-for (const signal of ['SIGINT', 'SIGTERM', 'SIGHUP']) process.on(signal, () => child.kill(signal));
-child.on('exit', (code, signal) => process.exit(code ?? (signal ? 1 : 0)));
+let received = null;
+for (const signal of ['SIGINT', 'SIGTERM', 'SIGHUP']) {
+  process.on(signal, () => {
+    received ??= signal;
+    child.kill(signal);
+  });
+}
+child.on('exit', (code, signal) => {
+  const dieBy = signal ?? received;
+  if (dieBy) {
+    // Die by the signal, as a shell expects (and skipping Node's exit-time terminal reset,
+    // which asserts when the terminal has gone away).
+    process.removeAllListeners(dieBy);
+    process.kill(process.pid, dieBy);
+  } else {
+    process.exit(code ?? 0);
+  }
+});

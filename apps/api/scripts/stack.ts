@@ -72,6 +72,12 @@ function onShutdown(cleanup: () => Promise<void> | void): () => Promise<void> {
   return once;
 }
 
+/** Ends this process by the signal that stopped it, as a shell expects. */
+function dieBy(signal: NodeJS.Signals): void {
+  process.removeAllListeners(signal);
+  process.kill(process.pid, signal);
+}
+
 function waitForExit(child: ChildProcess, timeoutMs: number): Promise<void> {
   return new Promise((resolve) => {
     if (child.exitCode !== null || child.signalCode !== null) return resolve();
@@ -105,7 +111,7 @@ async function start(): Promise<void> {
     console.log('stopped: API, worker and PostgreSQL');
   });
   for (const signal of ['SIGINT', 'SIGTERM', 'SIGHUP'] as const) {
-    process.on(signal, () => void shutdown().then(() => process.exit(0)));
+    process.on(signal, () => void shutdown().then(() => dieBy(signal)));
   }
 
   try {
@@ -154,7 +160,7 @@ async function test(extraArgs: string[]): Promise<number> {
     rmSync(baseDir, { recursive: true, force: true });
   });
   for (const signal of ['SIGINT', 'SIGTERM', 'SIGHUP'] as const) {
-    process.on(signal, () => void cleanup().then(() => process.exit(130)));
+    process.on(signal, () => void cleanup().then(() => dieBy(signal)));
   }
   try {
     const artifacts = path.join(root, 'test-artifacts');
