@@ -29,3 +29,56 @@ export function dotVec3(a: ReadonlyVec3, b: ReadonlyVec3): number {
 export function normVec3(a: ReadonlyVec3): number {
   return Math.hypot(a[0], a[1], a[2]);
 }
+
+/** out = a + b. */
+export function addVec3(out: Vec3, a: ReadonlyVec3, b: ReadonlyVec3): Vec3 {
+  out[0] = a[0] + b[0];
+  out[1] = a[1] + b[1];
+  out[2] = a[2] + b[2];
+  return out;
+}
+
+/** out = a - b. */
+export function subVec3(out: Vec3, a: ReadonlyVec3, b: ReadonlyVec3): Vec3 {
+  out[0] = a[0] - b[0];
+  out[1] = a[1] - b[1];
+  out[2] = a[2] - b[2];
+  return out;
+}
+
+/** out = a · k. */
+export function scaleVec3(out: Vec3, a: ReadonlyVec3, k: number): Vec3 {
+  out[0] = a[0] * k;
+  out[1] = a[1] * k;
+  out[2] = a[2] * k;
+  return out;
+}
+
+/** out = a × b (safe when out aliases a or b). */
+export function crossVec3(out: Vec3, a: ReadonlyVec3, b: ReadonlyVec3): Vec3 {
+  const x = a[1] * b[2] - a[2] * b[1];
+  const y = a[2] * b[0] - a[0] * b[2];
+  const z = a[0] * b[1] - a[1] * b[0];
+  out[0] = x;
+  out[1] = y;
+  out[2] = z;
+  return out;
+}
+
+/** out = a / |a|; leaves a zero vector zero (callers that must refuse it check the norm first). */
+export function normalizeVec3(out: Vec3, a: ReadonlyVec3): Vec3 {
+  const n = Math.hypot(a[0], a[1], a[2]);
+  const k = n > 0 ? 1 / n : 0;
+  out[0] = a[0] * k;
+  out[1] = a[1] * k;
+  out[2] = a[2] * k;
+  return out;
+}
+
+/** Copies a into out. */
+export function copyVec3(out: Vec3, a: ReadonlyVec3): Vec3 {
+  out[0] = a[0];
+  out[1] = a[1];
+  out[2] = a[2];
+  return out;
+}
