@@ -36,3 +36,33 @@ export { demoDataSchema } from './demo';
 export type { DemoData } from './demo';
 export { healthSchema } from './health';
 export type { Health } from './health';
+export {
+  ATTITUDE_QUATERNION_NORM_TOLERANCE,
+  MAX_INLINE_PROFILE_ROWS,
+  attitudeLawKinds,
+  attitudeLawKindSchema,
+  secondaryReferences,
+  secondaryReferenceSchema,
+  inertialLawSchema,
+  sunPointingLawSchema,
+  lvlhLawSchema,
+  sailConeClockLawSchema,
+  attitudeProfileRowSchema,
+  tabulatedLawSchema,
+  attitudeLawSchema,
+} from './attitude';
+export type { AttitudeLawKind, SecondaryReference, AttitudeProfileRow, AttitudeLawDefinition } from './attitude';
+export {
+  orbitFrames,
+  orbitFrameSchema,
+  ORBIT_FRAME_LABEL,
+  centralBodies,
+  centralBodySchema,
+  epochUtcSchema,
+  keplerianOrbitSchema,
+  cartesianOrbitSchema,
+  initialOrbitSchema,
+} from './orbit';
+export type { OrbitFrame, CentralBody, KeplerianOrbit, CartesianOrbit, InitialOrbit } from './orbit';
+export { vehicleSpecSchema, vehicleKinds, materialPresetKeys, sailOpticsPresetKeys } from './vehicle';
+export type { VehicleSpec } from './vehicle';

@@ -163,3 +163,41 @@ describe('flatPlateForce and createFlatPlate contracts', () => {
     expect(() => flatPlateForce(createVec3(), plate, Z, Number.NaN)).toThrow(SrpError);
   });
 });
+
+describe('flatPlateForce on a two-sided plate with thermal re-emission', () => {
+  // A black plate (absorbs everything) whose front face radiates with ε = 0.9 and back face with
+  // ε = 0.1; emissivities given on the front only, so the back inherits them swapped.
+  const plate = createFlatPlate({
+    area: AREA,
+    normal: Z,
+    front: { absorbed: 1, specular: 0, diffuse: 0, emissivityFront: 0.9, emissivityBack: 0.1 },
+    back: ABSORBER,
+  });
+  // By hand, face by face: in steady state the absorbed power W = P c A splits 0.9 : 0.1 between
+  // the faces; Lambertian emission of power w from a face pushes it with (2/3) w / c against
+  // that face's outward normal (source: Montenbruck & Gill 2000, §3.4, the 2/3 of a Lambertian
+  // emitter). Front face: 0.6 P A along -n; back face: 0.0667 P A along +n.
+  const front = (2 / 3) * 0.9 * P_1AU * AREA;
+  const back = (2 / 3) * 0.1 * P_1AU * AREA;
+
+  it('lit on the front, the light and the hotter-radiating front both push along -n', () => {
+    const expected: ReadonlyVec3 = [0, 0, -P_1AU * AREA - front + back];
+    expectVecClose(flatPlateForce(createVec3(), plate, Z, P_1AU), expected, REL_TOL);
+  });
+
+  it('lit on the back, the light pushes along +n but the front face still radiates more and pushes back', () => {
+    const expected: ReadonlyVec3 = [0, 0, P_1AU * AREA - front + back];
+    expectVecClose(flatPlateForce(createVec3(), plate, [0, 0, -1], P_1AU), expected, REL_TOL);
+  });
+
+  it('lit on the back at 60°, it follows the same flat-plate law about -n with the back optics', () => {
+    // source: Montenbruck & Gill 2000, §3.4 with m = -n; the absorber's thermal term as above
+    const theta = (60 * Math.PI) / 180;
+    const s: ReadonlyVec3 = [Math.sin(theta), 0, -Math.cos(theta)];
+    const cos = Math.cos(theta);
+    const thermal = (2 / 3) * ((0.1 - 0.9) / (0.1 + 0.9)); // lit face radiates 0.1, the other 0.9
+    const k = -P_1AU * AREA * cos;
+    const expected: ReadonlyVec3 = [k * s[0], 0, k * s[2] - k * thermal];
+    expectVecClose(flatPlateForce(createVec3(), plate, s, P_1AU), expected, REL_TOL);
+  });
+});

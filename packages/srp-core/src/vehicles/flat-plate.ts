@@ -1,8 +1,10 @@
 import { SrpError, requirePositive } from '../errors';
 import { dotVec3, normVec3, setVec3 } from '../math/vec3';
 import type { ReadonlyVec3, Vec3 } from '../math/vec3';
-import { checkSurfaceOptics } from './surface-optics';
+import { resolvePlateOptics } from './plate-optics';
+import type { SurfaceOpticsInput } from './plate-optics';
 import type { SurfaceOptics } from './surface-optics';
+import { surfaceForceCoefficients } from './surface-optics';
 
 /** A flat plate as a caller describes it, before checking. */
 export interface FlatPlateSpec {
@@ -10,8 +12,10 @@ export interface FlatPlateSpec {
   area: number;
   /** Outward normal of the front side, body frame; any non-zero length, normalised on creation. */
   normal: ReadonlyVec3;
-  /** Optics of the front side. The back side is inert for now (one-sided plate). */
-  front: SurfaceOptics;
+  /** Optics of the front side (fractions, or a material preset name). */
+  front: SurfaceOpticsInput;
+  /** Optics of the back side; absent means the back takes no light (one-sided plate). */
+  back?: SurfaceOpticsInput;
 }
 
 declare const checkedPlate: unique symbol;
@@ -27,8 +31,25 @@ export type FlatPlate = {
   readonly normal: ReadonlyVec3;
   /** Optics of the front side. */
   readonly front: Readonly<SurfaceOptics>;
+  /** Optics of the back side, null for a one-sided plate. */
+  readonly back: Readonly<SurfaceOptics> | null;
+  /** Force coefficients c0, c1, c2 of the front side then of the back side (`surfaceForceCoefficients`). */
+  readonly coefficients: Float64Array;
   readonly [checkedPlate]: true;
 };
+
+/** Throws unless `v` is a finite non-zero vector; returns its length. */
+export function requireDirection(v: ReadonlyVec3, field: string): number {
+  const length = normVec3(v);
+  if (!Number.isFinite(length) || length === 0) {
+    throw new SrpError(
+      'invalid_input',
+      `${field} must be a finite, non-zero vector; got [${v[0]}, ${v[1]}, ${v[2]}]`,
+      { field, value: [v[0], v[1], v[2]] },
+    );
+  }
+  return length;
+}
 
 /**
  * Checks a plate and returns a copy with its normal normalised (allocates; not for hot paths).
@@ -37,20 +58,18 @@ export type FlatPlate = {
  */
 export function createFlatPlate(spec: FlatPlateSpec, field = 'plate'): FlatPlate {
   requirePositive(spec.area, `${field}.area`, 'm^2');
+  const length = requireDirection(spec.normal, `${field}.normal`);
+  const optics = resolvePlateOptics(spec.front, spec.back, field);
+  const coefficients = new Float64Array(6);
+  surfaceForceCoefficients(coefficients, 0, optics.front);
+  if (optics.back) surfaceForceCoefficients(coefficients, 3, optics.back);
   const [nx, ny, nz] = spec.normal;
-  const length = normVec3(spec.normal);
-  if (!Number.isFinite(length) || length === 0) {
-    throw new SrpError(
-      'invalid_input',
-      `${field}.normal must be a finite, non-zero vector; got [${nx}, ${ny}, ${nz}]`,
-      { field: `${field}.normal`, value: [nx, ny, nz] },
-    );
-  }
-  const front = checkSurfaceOptics(spec.front, `${field}.front`);
   const plate = {
     area: spec.area,
     normal: [nx / length, ny / length, nz / length] as const,
-    front: { absorbed: front.absorbed, specular: front.specular, diffuse: front.diffuse },
+    front: optics.front,
+    back: optics.back,
+    coefficients,
   };
   return plate as FlatPlate;
 }
@@ -59,20 +78,23 @@ export function createFlatPlate(spec: FlatPlateSpec, field = 'plate'): FlatPlate
  * Tolerance on |satToSun|² - 1: a direction normalised in double precision is within ~1e-15,
  * one that went through single precision within ~1e-7; an unnormalised vector is far outside.
  */
-const UNIT_TOLERANCE = 1e-6;
+export const UNIT_TOLERANCE = 1e-6;
 
 /**
- * Solar radiation pressure force on a one-sided flat plate, standard flat-plate model with
- * Lambertian diffuse reflection:
+ * Solar radiation pressure force on a flat plate, standard flat-plate model with Lambertian
+ * diffuse reflection and optional Lambertian thermal re-emission:
  *
- *   F = -P A cos θ [ (1 - ρs) s + 2 (ρs cos θ + ρd / 3) n ],  cos θ = n · s,
+ *   F = -P A cos θ [ (1 - ρs) s + (2 ρs cos θ + 2 ρd / 3 + (2/3) α (εf - εb)/(εf + εb)) m ],
  *
- * with s the unit vector to the Sun, n the front normal, ρs and ρd the specular and diffuse
- * fractions. Zero when the Sun is behind or in the plane of the front side (cos θ ≤ 0).
+ * cos θ = m · s > 0, with s the unit vector to the Sun and m the outward normal of the lit face:
+ * the front normal n when n · s > 0 (front optics), -n when n · s < 0 and the plate has a back
+ * (back optics, whose emissivity roles are the front's swapped). ρs, ρd, α are the lit side's
+ * specular, diffuse and absorbed fractions. Zero when the Sun is in the plate's plane or behind a
+ * one-sided plate.
  * Source: Montenbruck & Gill, Satellite Orbits (Springer, 2000), §3.4, eq. (3.73) for the
  * absorbed + specular form (equation number from memory, not checked against the book here);
- * the Lambertian term 2ρd/3 n as in Milani, Nobili & Farinella, Non-gravitational Perturbations
- * and Satellite Geodesy (1987) (from memory).
+ * the Lambertian term 2ρd/3 m as in Milani, Nobili & Farinella, Non-gravitational Perturbations
+ * and Satellite Geodesy (1987) (from memory); the thermal term as in `surfaceForceCoefficients`.
  * Allocates nothing.
  * @param out receives the force (N), in the frame of `plate.normal` and `satToSun`
  * @param plate a plate from `createFlatPlate`
@@ -104,13 +126,20 @@ export function flatPlateForce(
     );
   }
   const n = plate.normal;
-  const cosTheta = dotVec3(n, satToSun);
+  let cosTheta = dotVec3(n, satToSun);
+  let sign = 1;
+  let base = 0;
+  if (cosTheta < 0 && plate.back !== null) {
+    cosTheta = -cosTheta;
+    sign = -1;
+    base = 3;
+  }
   if (cosTheta <= 0) return setVec3(out, 0, 0, 0);
 
-  const { specular, diffuse } = plate.front;
+  const c = plate.coefficients;
   const k = -pressure * plate.area * cosTheta;
-  const alongSun = k * (1 - specular);
-  const alongNormal = 2 * k * (specular * cosTheta + diffuse / 3);
+  const alongSun = k * c[base]!;
+  const alongNormal = sign * k * (c[base + 1]! * cosTheta + c[base + 2]!);
   return setVec3(
     out,
     alongSun * satToSun[0] + alongNormal * n[0],
