@@ -66,3 +66,5 @@ export {
 export type { OrbitFrame, CentralBody, KeplerianOrbit, CartesianOrbit, InitialOrbit } from './orbit';
 export { vehicleSpecSchema, vehicleKinds, materialPresetKeys, sailOpticsPresetKeys } from './vehicle';
 export type { VehicleSpec } from './vehicle';
+export { forceCommandSchema, eclipsesCommandSchema, shadowModelNames, eclipseBodyChoices } from './cli';
+export type { ForceCommand, EclipsesCommand } from './cli';

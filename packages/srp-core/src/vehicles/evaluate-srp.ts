@@ -80,8 +80,9 @@ function refuse(field: string, value: unknown, message: string, limit: string): 
  *   thermal re-emission, F_i = -P A cos θ [c0 s + (c1 cos θ + c2) m] with m the outward normal of
  *   the lit face, front or back (`flatPlateForce`; Montenbruck & Gill 2000, §3.4), each acting
  *   at the plate's centroid: τ = Σ (r_i - r_CoM) × F_i. Tracking plates first turn to the Sun
- *   (sun-tracking.ts). Each plate sees the full beam: no shadowing of one plate by another (the
- *   caller's vehicle must not rely on it, e.g. a convex bus and wings that do not shade it).
+ *   (sun-tracking.ts). Each plate sees the full beam: plates do not shade one another, so model
+ *   vehicles whose plates do not (a convex bus with wings beside it); self-shadowing is for
+ *   the mesh model.
  * - sail: McInnes's optical model of a flat sail (`sailForceCoefficients`; McInnes, Solar Sailing,
  *   1999, §2.6), acting at the sail centroid; no force with the Sun behind the sail (the
  *   published coefficients describe light on the front only).
