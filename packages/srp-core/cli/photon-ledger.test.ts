@@ -105,5 +105,15 @@ describe('photon-ledger command line', () => {
       encoding: 'utf8',
     });
     expect(JSON.parse(out).vehicle.kind).toBe('sail');
+    // The README's example: the demo GEO orbit is in penumbra at 13:55 UTC on 2026-03-20.
+    const readme = execFileSync(
+      'pnpm',
+      ['--silent', 'photon-ledger', 'force', '--vehicle', 'fixtures/vehicles/corvina-2.vehicle.json', '--orbit', 'fixtures/orbits/corvina-2.orbit.json',
+        '--attitude', 'fixtures/attitude/sun-pointing.attitude.json', '--at', '2026-03-20T13:55:00Z'],
+      { cwd: root, encoding: 'utf8' },
+    );
+    const fraction = JSON.parse(readme).inputs.illuminatedFraction;
+    expect(fraction).toBeGreaterThan(0);
+    expect(fraction).toBeLessThan(1);
   });
 });
