@@ -164,10 +164,10 @@ export function evaluateSrp(
 
   const rows = vehicle.hotRows;
   const tracking = vehicle.tracking;
-  const k0 = -pf; // -P f (Pa)
-  // Each surface's force is F_i = along_i s + np_i n_i (see below), so the sums factor:
-  //   Σ F_i = (Σ along_i) s + Σ np_i n_i,
-  //   Σ r_i × F_i = (Σ along_i r_i) × s + Σ np_i (r_i × n_i),
+  const k0 = -pf; // -P f (Pa), applied once to the sums below rather than per surface
+  // Each surface's force is F_i = k0 (along_i s + np_i n_i) (see below), so the sums factor:
+  //   Σ F_i = k0 [(Σ along_i) s + Σ np_i n_i],
+  //   Σ r_i × F_i = k0 [(Σ along_i r_i) × s + Σ np_i (r_i × n_i)],
   // and r × n of a fixed surface is packed at compile time: no cross product per fixed surface.
   let sumAlong = 0;
   let fnx = 0;
@@ -246,13 +246,14 @@ export function evaluateSrp(
     const cos = nx * sx + ny * sy + nz * sz;
     // Light on the back (cos < 0) uses the back's coefficients (zeros for a one-sided plate) and
     // the reversed normal m = -n; with a = |cos θ| both sides read
-    //   F = -P f a A c0 s - P f cos θ A (c1 a + c2) n   (A folded into the packed coefficients).
+    //   F = -P f [a A c0 s + cos θ A (c1 a + c2) n]   (A folded into the packed coefficients),
+    // i.e. along = a A c0 and np = cos θ A (c1 a + c2), times k0 = -P f.
     const front = h + 9;
     const back = h + 12;
     const c = cos < 0 ? back : front;
     const a = Math.abs(cos);
-    const along = k0 * a * rows[c]!;
-    const np = k0 * cos * (rows[c + 1]! * a + rows[c + 2]!);
+    const along = a * rows[c]!;
+    const np = cos * (rows[c + 1]! * a + rows[c + 2]!);
     sumAlong += along;
     fnx += np * nx;
     fny += np * ny;
@@ -265,9 +266,9 @@ export function evaluateSrp(
     tnz += np * rnz;
     if (perSurface) {
       const o = 6 * i;
-      const px = along * sx + np * nx;
-      const py = along * sy + np * ny;
-      const pz = along * sz + np * nz;
+      const px = k0 * (along * sx + np * nx);
+      const py = k0 * (along * sy + np * ny);
+      const pz = k0 * (along * sz + np * nz);
       surfaces[o] = px;
       surfaces[o + 1] = py;
       surfaces[o + 2] = pz;
@@ -276,12 +277,13 @@ export function evaluateSrp(
       surfaces[o + 5] = rx * py - ry * px;
     }
   }
-  force[0] = sumAlong * sx + fnx;
-  force[1] = sumAlong * sy + fny;
-  force[2] = sumAlong * sz + fnz;
-  torque[0] = ray * sz - raz * sy + tnx;
-  torque[1] = raz * sx - rax * sz + tny;
-  torque[2] = rax * sy - ray * sx + tnz;
+  // `+ 0` turns the -0 of an unlit vehicle (k0 < 0 times 0) into 0 for tables and exports.
+  force[0] = k0 * (sumAlong * sx + fnx) + 0;
+  force[1] = k0 * (sumAlong * sy + fny) + 0;
+  force[2] = k0 * (sumAlong * sz + fnz) + 0;
+  torque[0] = k0 * (ray * sz - raz * sy + tnx) + 0;
+  torque[1] = k0 * (raz * sx - rax * sz + tny) + 0;
+  torque[2] = k0 * (rax * sy - ray * sx + tnz) + 0;
   return out;
 }
 
