@@ -68,3 +68,26 @@ export { vehicleSpecSchema, vehicleKinds, materialPresetKeys, sailOpticsPresetKe
 export type { VehicleSpec } from './vehicle';
 export { forceCommandSchema, eclipsesCommandSchema, shadowModelNames, eclipseBodyChoices } from './cli';
 export type { ForceCommand, EclipsesCommand } from './cli';
+export {
+  budgetLineUnits,
+  budgetLineKeys,
+  budgetLineKeySchema,
+  budgetComparators,
+  budgetComparatorSchema,
+  budgetRequirementSchema,
+  budgetRequirementsSchema,
+  requirementSchema,
+  budgetLineStatuses,
+  budgetLineStatusSchema,
+  budgetLineResultSchema,
+} from './budget';
+export type { BudgetLineKey, BudgetRequirement, BudgetLineResult } from './budget';
+export {
+  scenarioSchema,
+  scenarioAttitudeSchema,
+  sailLocallyOptimalLawSchema,
+  forceSwitchesSchema,
+  tolerancesSchema,
+  thirdBodyPlanets,
+} from './scenario';
+export type { Scenario } from './scenario';

@@ -4,6 +4,8 @@
  *   photon-ledger force --vehicle FILE --sun-dir-body x,y,z [--distance-au R] [--s0 W/m²] [--per-surface]
  *   photon-ledger force --vehicle FILE --orbit FILE --attitude FILE [--at UTC] [--shadow MODEL] [--per-surface]
  *   photon-ledger eclipses --orbit FILE --span-days N [--bodies earth,moon] [--step-s S] [--format json|csv]
+ *   photon-ledger propagate SCENARIO [--csv FILE] [--oem FILE]     (summary and budget JSON on stdout)
+ *   photon-ledger budget SCENARIO [--format text|json]
  *
  * Results go to stdout; mistakes to stderr with exit code 2; failures with exit code 1.
  */
@@ -12,11 +14,14 @@ import { SrpError } from '../src/index';
 import { CliError } from './cli-error';
 import { eclipsesCommand } from './commands/eclipses';
 import { forceCommand } from './commands/force';
+import { budgetCommand, propagateCommand } from './commands/propagate';
 
 const USAGE = `usage:
   photon-ledger force --vehicle FILE --sun-dir-body x,y,z [--distance-au R] [--s0 W/m2] [--per-surface]
   photon-ledger force --vehicle FILE --orbit FILE --attitude FILE [--at UTC] [--shadow none|cylindrical|conical] [--s0 W/m2] [--per-surface]
   photon-ledger eclipses --orbit FILE --span-days N [--bodies earth|moon|earth,moon] [--step-s S] [--format json|csv]
+  photon-ledger propagate SCENARIO [--csv FILE] [--oem FILE]
+  photon-ledger budget SCENARIO [--format text|json]
 
 Files: vehicle, orbit and attitude-law JSON as described in README.md (see fixtures/ for examples).`;
 
@@ -34,15 +39,22 @@ const options = {
   bodies: { type: 'string' },
   'step-s': { type: 'string' },
   format: { type: 'string' },
+  csv: { type: 'string' },
+  oem: { type: 'string' },
   help: { type: 'boolean', short: 'h' },
 } as const;
 
-const commands: Record<string, (o: Record<string, unknown>) => string> = {
+const commands: Record<string, (o: Record<string, unknown>) => string | Promise<string>> = {
   force: forceCommand,
   eclipses: eclipsesCommand,
+  propagate: propagateCommand,
+  budget: budgetCommand,
 };
 
-function main(argv: string[]): number {
+/** Commands that take one positional argument: the scenario file. */
+const scenarioCommands = new Set(['propagate', 'budget']);
+
+async function main(argv: string[]): Promise<number> {
   let parsed;
   try {
     parsed = parseArgs({ args: argv, options, allowPositionals: true, strict: true });
@@ -56,12 +68,14 @@ function main(argv: string[]): number {
     return name || parsed.values.help ? 0 : 2;
   }
   const command = commands[name];
-  if (!command || extra.length > 0) {
+  const takesScenario = scenarioCommands.has(name);
+  if (!command || extra.length > (takesScenario ? 1 : 0)) {
     process.stderr.write(`photon-ledger: unknown command ${[name, ...extra].join(' ')}\n${USAGE}\n`);
     return 2;
   }
   try {
-    process.stdout.write(`${command(parsed.values)}\n`);
+    const input: Record<string, unknown> = takesScenario ? { ...parsed.values, scenario: extra[0] } : parsed.values;
+    process.stdout.write(`${await command(input)}\n`);
     return 0;
   } catch (err) {
     if (err instanceof CliError) {
@@ -77,4 +91,4 @@ function main(argv: string[]): number {
   }
 }
 
-process.exitCode = main(process.argv.slice(2));
+process.exitCode = await main(process.argv.slice(2));

@@ -7,3 +7,5 @@ export { vehicleFromFile } from './vehicle-adapter';
 export { orbitFromFile } from './orbit-adapter';
 export type { OrbitState } from './orbit-adapter';
 export { attitudeFromDefinition } from './attitude-adapter';
+export { buildScenarioRun } from './scenario-adapter';
+export type { ScenarioRun } from './scenario-adapter';

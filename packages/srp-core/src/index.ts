@@ -165,3 +165,93 @@ export {
   idealSailCharacteristicAcceleration,
   criticalSailLoading,
 } from './vehicles/sail-performance';
+export { createDynamics } from './propagation/forces/dynamics';
+export type { ForceModel, ForceDerivative } from './propagation/forces/force-model';
+export { createCentralBodyForce } from './propagation/forces/central-body';
+export { createZonalForce, EARTH_ZONAL_J } from './propagation/forces/earth-zonal';
+export type { ZonalForceOptions } from './propagation/forces/earth-zonal';
+export {
+  createThirdBodyForce,
+  createSunThirdBodyForce,
+  createMoonThirdBodyForce,
+  createPlanetThirdBodyForce,
+  thirdBodyAcceleration,
+} from './propagation/forces/third-body';
+export { createPositionMemo } from './propagation/forces/ephemeris-cache';
+export type { PositionMemo } from './propagation/forces/ephemeris-cache';
+export {
+  createDragForce,
+  exponentialDensity,
+  EXPONENTIAL_ATMOSPHERE_TABLE,
+  ATMOSPHERE_TOP_M,
+  EARTH_ROTATION_RATE,
+} from './propagation/forces/drag';
+export type { DragForceOptions } from './propagation/forces/drag';
+export { createSrpForce, createSrpDetail } from './propagation/forces/srp-force';
+export type { SrpForce, SrpDetail, SrpForceOptions } from './propagation/forces/srp-force';
+export { createShadowEvents } from './propagation/forces/shadow-events';
+export type { ShadowStepEvent, ShadowEventOptions } from './propagation/forces/shadow-events';
+export {
+  createHeliocentricEphemeris,
+  planetGm,
+  DEFAULT_PLANET_SEGMENT_SECONDS,
+  DEFAULT_PLANET_DEGREE,
+} from './bodies/heliocentric-ephemeris';
+export type { HeliocentricEphemeris, HeliocentricEphemerisOptions } from './bodies/heliocentric-ephemeris';
+export { createLocallyOptimalSteering, optimalConeAngle } from './attitude/sail-optimal-steering';
+export type {
+  LocallyOptimalSteeringOptions,
+  SailSteeringGoal,
+  SailSteeringDirection,
+} from './attitude/sail-optimal-steering';
+export { createDop853 } from './propagation/integrator/dop853';
+export type { Derivative, IntegratorOptions, Dop853, Dop853Stepper } from './propagation/integrator/dop853';
+export { createEventLocator } from './propagation/integrator/event-locator';
+export type { StepEvent, LocatedEvent, EventLocator, EventLocatorOptions } from './propagation/integrator/event-locator';
+export { integrate } from './propagation/integrator/integrate';
+export type { IntegrateHooks, IntegrateResult } from './propagation/integrator/integrate';
+export { propagate } from './propagation/propagate';
+export type { PropagationRequest, PropagationResult } from './propagation/propagate';
+export {
+  createSampleLayout,
+  forceColumn,
+  SAMPLE_T,
+  SAMPLE_R,
+  SAMPLE_V,
+  SAMPLE_SRP_ACCEL_INERTIAL,
+  SAMPLE_SRP_ACCEL_BODY,
+  SAMPLE_SRP_TORQUE_BODY,
+  SAMPLE_ILLUMINATED_FRACTION,
+  SAMPLE_SUN_DISTANCE,
+  SAMPLE_FORCE_ACCEL,
+} from './propagation/sample-layout';
+export type { SampleLayout, SampleHistory } from './propagation/sample-layout';
+export {
+  budgetLineKeys,
+  budgetLineDefinitions,
+  marginPercent,
+  budgetLine,
+  applyRequirement,
+  applyRequirements,
+  MARGIN_RELATIVE_TOLERANCE,
+} from './budgets/budget-line';
+export type { BudgetLineKey, BudgetLine, BudgetLineStatus, BudgetComparator, BudgetRequirement } from './budgets/budget-line';
+export { computeBudget } from './budgets/compute-budget';
+export type { BudgetContext, SrpBudget } from './budgets/compute-budget';
+export { checkHistory, timeStatistics } from './budgets/sample-history';
+export type { TimeStatistics } from './budgets/sample-history';
+export { srpAccelerationStatistics, perturbationTable } from './budgets/srp-acceleration';
+export type { PerturbationRow } from './budgets/srp-acceleration';
+export { srpDeltaV } from './budgets/srp-delta-v';
+export type { SrpDeltaV } from './budgets/srp-delta-v';
+export { secularDrift } from './budgets/secular-drift';
+export type { SecularDrift } from './budgets/secular-drift';
+export { torqueStatistics, momentumBudget } from './budgets/momentum';
+export type { TorqueStatistics, MomentumOptions, MomentumBudget, DumpCriterion } from './budgets/momentum';
+export { sailBudget, timeToHeliocentricRadius } from './budgets/sail-budget';
+export type { SailContext, SailBudget } from './budgets/sail-budget';
+export { EXPORT_CAUTION } from './exports/caution';
+export { EPHEMERIS_CSV_COLUMNS, ephemerisCsvHeader, ephemerisCsvChunks, ephemerisCsv, parseEphemerisCsv } from './exports/csv-ephemeris';
+export type { EphemerisCsvOptions, ParsedEphemerisCsv } from './exports/csv-ephemeris';
+export { OEM_MANDATORY_HEADER_KEYWORDS, OEM_MANDATORY_METADATA_KEYWORDS, oemChunks, oemText, parseOem } from './exports/oem';
+export type { OemOptions, OemSegment, ParsedOem } from './exports/oem';

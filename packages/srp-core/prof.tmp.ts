@@ -1,0 +1,16 @@
+import { measure } from './bench/measure';
+import { createGeocentricEphemeris } from './src/bodies/geocentric-ephemeris';
+import { evaluateChebyshevTable } from './src/bodies/chebyshev-table';
+import { parseUtcEpoch } from './src/time/epoch';
+import { createAttitudeLaw, attitudeAt } from './src/attitude/attitude-law';
+import { earthMoonShadowFraction } from './src/radiation/shadow';
+const eph = createGeocentricEphemeris(parseUtcEpoch('2026-03-20T00:00:00Z'), 0, 2*86400);
+const out:[number,number,number]=[0,0,0]; let t=0; const sink=new Float64Array(1);
+measure('cheb direct', 1, ()=>{ t+=0.37; if (t>1e5) t=0; evaluateChebyshevTable(out, eph.sun, t); sink[0]+=out[0]; });
+measure('sunPositionAt', 1, ()=>{ t+=0.37; if (t>1e5) t=0; eph.sunPositionAt(out, t); sink[0]+=out[0]; });
+const law = createAttitudeLaw({law:'sun-pointing',sunAxisBody:[1,0,0],secondaryAxisBody:[0,1,0],secondaryReference:'orbit-normal'});
+const q:[number,number,number,number]=[1,0,0,0]; const r:[number,number,number]=[42164e3,0,0]; const v:[number,number,number]=[0,3074,0];
+const s:[number,number,number]=[1.4e11,2e10,3e10]; const m:[number,number,number]=[3e8,2e8,1e8];
+measure('attitude', 1, ()=>{ r[1]+=1; attitudeAt(q, law, 0, r, v, s); sink[0]+=q[0]; });
+measure('shadow E+M', 1, ()=>{ r[1]+=1; sink[0]+=earthMoonShadowFraction('conical', r, s, m); });
+let x=0; measure('reference loop 1000', 1000, ()=>{ for(let i=0;i<1000;i++){x+=i*0.5*x%3;} sink[0]+=x; });
