@@ -1,5 +1,5 @@
 import { execFileSync, spawnSync } from 'node:child_process';
-import { mkdtempSync, writeFileSync } from 'node:fs';
+import { mkdtempSync, readFileSync, writeFileSync } from 'node:fs';
 import os from 'node:os';
 import path from 'node:path';
 import { fileURLToPath } from 'node:url';
@@ -115,5 +115,58 @@ describe('photon-ledger command line', () => {
     const fraction = JSON.parse(readme).inputs.illuminatedFraction;
     expect(fraction).toBeGreaterThan(0);
     expect(fraction).toBeLessThan(1);
+  });
+});
+
+describe('photon-ledger propagate and budget', () => {
+  const scenarios = path.join(fixtures, 'scenarios');
+  const shortGeo = () => {
+    const s = JSON.parse(readFileSync(path.join(scenarios, 'corvina-2-geo-30d.scenario.json'), 'utf8'));
+    return file('short.scenario.json', {
+      ...s,
+      vehicle: { ref: corvina },
+      spanDays: 2,
+      outputStepS: 300,
+    });
+  };
+
+  it('propagate writes a CSV and a CCSDS OEM that parse back with the same final position', () => {
+    const csv = path.join(tmp, 'eph.csv');
+    const oem = path.join(tmp, 'eph.oem');
+    const r = run(['propagate', shortGeo(), '--csv', csv, '--oem', oem]);
+    expect(r.code).toBe(0);
+    const summary = JSON.parse(r.stdout);
+    expect(summary.samples).toBe(2 * 288 + 1);
+    expect(summary.caution).toMatch(/independent analysis/);
+    // Two days in eclipse season: each day one Earth eclipse, four edges each (penumbra/umbra in and out).
+    expect(summary.events.filter((e: { name: string }) => e.name.startsWith('earth')).length).toBe(8);
+    const csvText = readFileSync(csv, 'utf8');
+    const oemText = readFileSync(oem, 'utf8');
+    expect(csvText).toMatch(/EQJ/);
+    expect(csvText).toMatch(/independent analysis/);
+    expect(oemText).toMatch(/^CCSDS_OEM_VERS\s*=\s*3\.0/m);
+    expect(oemText).toMatch(/REF_FRAME\s*=\s*EME2000/);
+    const lastCsv = csvText.trim().split('\n').at(-1)!.split(',');
+    const lastOem = oemText.trim().split('\n').filter((l) => /^\d{4}-/.test(l)).at(-1)!.trim().split(/\s+/);
+    // CSV in metres, OEM in kilometres: the same final x to the OEM's printed precision.
+    expect(Number(lastOem[1]) * 1000).toBeCloseTo(Number(lastCsv[2]), 0);
+  });
+
+  it('budget prints the table with requirement, margin and status, and JSON on request', () => {
+    const text = run(['budget', shortGeo()]);
+    expect(text.code).toBe(0);
+    expect(text.stdout).toMatch(/SRP acceleration, maximum \|a\|.*<= 2e-7.*pass/);
+    expect(text.stdout).toMatch(/independent analysis/);
+    const json = run(['budget', shortGeo(), '--format', 'json']);
+    const lines = JSON.parse(json.stdout).lines as { key: string; status: string }[];
+    expect(lines.find((l) => l.key === 'srp.accel.max')?.status).toBe('pass');
+  });
+
+  it('a scenario with a bad field exits 2 naming it', () => {
+    const s = JSON.parse(readFileSync(path.join(scenarios, 'corvina-2-geo-30d.scenario.json'), 'utf8'));
+    const bad = file('bad.scenario.json', { ...s, vehicle: { ref: corvina }, outputStepS: -5 });
+    const r = run(['budget', bad]);
+    expect(r.code).toBe(2);
+    expect(r.stderr).toMatch(/outputStepS/);
   });
 });

@@ -97,7 +97,14 @@ export function propagate(req: PropagationRequest): PropagationResult {
       samples[o + layout.illuminatedFraction] = 1;
     }
     for (let i = 0; i < req.forces.length; i += 1) {
-      req.forces[i]!.acceleration(accel, t, state);
+      const force = req.forces[i]!;
+      if (force === req.srp) {
+        // Already evaluated for the detail columns.
+        const a = detail.accelInertial;
+        samples[o + layout.forceAccel + i] = Math.sqrt(a[0] * a[0] + a[1] * a[1] + a[2] * a[2]);
+        continue;
+      }
+      force.acceleration(accel, t, state);
       samples[o + layout.forceAccel + i] = Math.sqrt(accel[0] * accel[0] + accel[1] * accel[1] + accel[2] * accel[2]);
     }
   };

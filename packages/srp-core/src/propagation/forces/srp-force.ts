@@ -183,7 +183,20 @@ export function createSrpForce(opts: SrpForceOptions): SrpForce {
     rotateInertialToBody(sunDirBody, q, sunDirInertial);
     const nu = illuminated(sunPos, t);
     last[0] = nu;
-    evaluateSrp(result, vehicle, sunDirBody, pressureTimesD2 / d2, nu);
+    // evaluateSrp is linear in P·ν (the Sun direction alone sets the tracking angles and the
+    // incidence), so it runs at 1 Pa, full Sun, and the result is scaled: passing the computed P
+    // and ν would box two doubles into a call V8 does not inline (two allocations per evaluation).
+    evaluateSrp(result, vehicle, sunDirBody, 1, 1);
+    const k = (pressureTimesD2 / d2) * nu;
+    const fb = result.forceBody;
+    const tb = result.torqueBody;
+    // `+ 0` turns the −0 of an eclipsed vehicle into 0, as evaluateSrp does.
+    fb[0] = fb[0] * k + 0;
+    fb[1] = fb[1] * k + 0;
+    fb[2] = fb[2] * k + 0;
+    tb[0] = tb[0] * k + 0;
+    tb[1] = tb[1] * k + 0;
+    tb[2] = tb[2] * k + 0;
   }
 
   return {

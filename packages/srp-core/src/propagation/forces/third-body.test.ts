@@ -44,7 +44,7 @@ describe('thirdBodyAcceleration (Battin F(q) form)', () => {
     ];
     const a: Vec3 = [0, 0, 0];
     for (const [mu, r, s] of cases) {
-      thirdBodyAcceleration(a, mu, r[0]!, r[1]!, r[2]!, s as Vec3);
+      thirdBodyAcceleration(a, mu, r, s as Vec3);
       const want = plainDifference(mu, r, s);
       const scale = Math.hypot(want[0]!, want[1]!, want[2]!);
       for (let k = 0; k < 3; k += 1) expect(Math.abs(a[k]! - want[k]!)).toBeLessThan(1e-11 * scale);
@@ -59,13 +59,13 @@ describe('thirdBodyAcceleration (Battin F(q) form)', () => {
     const r = R_GEO;
     const want = (MU_SUN * r * (2 * d - r)) / (d * d * (d - r) ** 2);
     const a: Vec3 = [0, 0, 0];
-    thirdBodyAcceleration(a, MU_SUN, r, 0, 0, [d, 0, 0]);
+    thirdBodyAcceleration(a, MU_SUN, [r, 0, 0], [d, 0, 0]);
     expect(a[0] / want - 1).toBeCloseTo(0, 12);
     expect(want).toBeGreaterThan(3.3e-6);
     expect(want).toBeLessThan(3.4e-6);
     // Perpendicular to the Sun line it is about half as large and points to the Earth:
     // a_y = −μ r / (d² + r²)^{3/2} exactly (the indirect term has no y component).
-    thirdBodyAcceleration(a, MU_SUN, 0, r, 0, [d, 0, 0]);
+    thirdBodyAcceleration(a, MU_SUN, [0, r, 0], [d, 0, 0]);
     expect(a[1] / (-(MU_SUN * r) / (d * d + r * r) ** 1.5)).toBeCloseTo(1, 12);
   });
 
@@ -77,9 +77,9 @@ describe('thirdBodyAcceleration (Battin F(q) form)', () => {
     const near = (MU_MOON * r * (2 * d - r)) / (d * d * (d - r) ** 2);
     const far = (MU_MOON * r * (2 * d + r)) / (d * d * (d + r) ** 2);
     const a: Vec3 = [0, 0, 0];
-    thirdBodyAcceleration(a, MU_MOON, r, 0, 0, [d, 0, 0]);
+    thirdBodyAcceleration(a, MU_MOON, [r, 0, 0], [d, 0, 0]);
     expect(a[0] / near).toBeCloseTo(1, 12);
-    thirdBodyAcceleration(a, MU_MOON, -r, 0, 0, [d, 0, 0]);
+    thirdBodyAcceleration(a, MU_MOON, [-r, 0, 0], [d, 0, 0]);
     expect(-a[0] / far).toBeCloseTo(1, 12);
     expect(near).toBeCloseTo(8.68e-6, 8);
     expect(far).toBeCloseTo(6.24e-6, 8);
@@ -102,7 +102,7 @@ describe('Sun, Moon and planet third-body forces', () => {
     ]) {
       force.acceleration(a, 3600, y);
       at(s, 3600);
-      thirdBodyAcceleration(want, mu, y[0]!, y[1]!, y[2]!, s);
+      thirdBodyAcceleration(want, mu, y, s);
       for (let k = 0; k < 3; k += 1) expect(Math.abs(a[k]! - want[k]!)).toBeLessThanOrEqual(1e-15 * Math.hypot(...want));
     }
   });

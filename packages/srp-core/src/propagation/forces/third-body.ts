@@ -26,9 +26,15 @@ import type { ForceModel } from './force-model';
 /**
  * The third-body acceleration (m/s²) of a body of parameter `mu` at `s` on a spacecraft at `r`,
  * both relative to the central body (m), by Battin's F(q) (file comment). Allocates nothing.
+ * @param r spacecraft position (m): the first three entries are read (a state vector will do)
  * @returns out
  */
-export function thirdBodyAcceleration(out: Vec3, mu: number, rx: number, ry: number, rz: number, s: ReadonlyVec3): Vec3 {
+export function thirdBodyAcceleration(out: Vec3, mu: number, r: ArrayLike<number>, s: ReadonlyVec3): Vec3 {
+  // Positions passed as arrays, not as three numbers: V8 boxes double arguments of a call it
+  // does not inline (an allocation per call).
+  const rx = r[0]!;
+  const ry = r[1]!;
+  const rz = r[2]!;
   const sx = s[0];
   const sy = s[1];
   const sz = s[2];
@@ -57,7 +63,7 @@ export function createThirdBodyForce(name: string, mu: number, position: Positio
   return {
     name,
     acceleration(out: Vec3, t: number, y: Float64Array): Vec3 {
-      return thirdBodyAcceleration(out, mu, y[0]!, y[1]!, y[2]!, position.at(t));
+      return thirdBodyAcceleration(out, mu, y, position.at(t));
     },
   };
 }

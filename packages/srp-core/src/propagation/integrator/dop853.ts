@@ -258,7 +258,8 @@ class Dop853Integrator implements Dop853Stepper {
       if (0.1 * Math.abs(h) <= Math.abs(t) * EPS || !(Math.abs(h) > 0)) {
         throw new SrpError(
           'not_converged',
-          `step size underflow at t = ${t} s: step ${h} s is below the time resolution (relTol ${relTol}, absTol ${absTol}); the derivative may be singular or not finite there`,
+          `step size underflow at t = ${t} s: step ${h} s is below the time resolution ` +
+            `(relTol ${relTol}, absTol ${absTol}); the derivative may be singular or not finite there`,
           { field: 'step', value: h, limit: `> ${10 * Math.abs(t) * EPS}` },
         );
       }
@@ -331,14 +332,16 @@ class Dop853Integrator implements Dop853Stepper {
       let err3 = 0;
       for (let i = 0; i < n; i += 1) {
         const slope =
-          B1 * k1[i]! + B6 * k6[i]! + B7 * k7[i]! + B8 * k8[i]! + B9 * k9[i]! + B10 * k10[i]! + B11 * k11[i]! + B12 * k12[i]!;
+          B1 * k1[i]! + B6 * k6[i]! + B7 * k7[i]! + B8 * k8[i]! + B9 * k9[i]! + B10 * k10[i]! + B11 * k11[i]! +
+          B12 * k12[i]!;
         const yi = y[i]!;
         const y1i = yi + h * slope;
         y1[i] = y1i;
         const sk = absTol + relTol * Math.max(Math.abs(yi), Math.abs(y1i));
         const e3 = (slope - BHH1 * k1[i]! - BHH2 * k9[i]! - BHH3 * k12[i]!) / sk;
         const e5 =
-          (ER1 * k1[i]! + ER6 * k6[i]! + ER7 * k7[i]! + ER8 * k8[i]! + ER9 * k9[i]! + ER10 * k10[i]! + ER11 * k11[i]! + ER12 * k12[i]!) /
+          (ER1 * k1[i]! + ER6 * k6[i]! + ER7 * k7[i]! + ER8 * k8[i]! + ER9 * k9[i]! + ER10 * k10[i]! +
+            ER11 * k11[i]! + ER12 * k12[i]!) /
           sk;
         err3 += e3 * e3;
         err5 += e5 * e5;
