@@ -56,8 +56,11 @@ export const forceSwitchesSchema = z.object({
 export const tolerancesSchema = z.object({
   /** Relative tolerance of the adaptive integrator (-). */
   relTol: z.number().min(1e-14, 'relTol must be at least 1e-14').max(1e-3, 'relTol must be at most 1e-3').default(1e-10),
-  /** Absolute tolerance on position (m) and velocity (m/s) components. */
-  absTol: z.number().min(1e-12, 'absTol must be at least 1e-12').max(1e3, 'absTol must be at most 1000').default(1e-4),
+  /**
+   * Absolute tolerance per component, in m for positions and m/s for velocities (one number for
+   * both, so keep it small: the relative tolerance should govern both).
+   */
+  absTol: z.number().min(1e-14, 'absTol must be at least 1e-14').max(1e3, 'absTol must be at most 1000').default(1e-9),
   /** Largest step (s); omitted: no limit beyond the output step. */
   maxStepS: positive('tolerances.maxStepS', 's').optional(),
 });
@@ -89,7 +92,7 @@ export const scenarioSchema = z
     attitude: scenarioAttitudeSchema,
     /** Solar constant at 1 AU (W/m²); default 1361 (IAU 2015 Resolution B3). A higher value budgets a worst case. */
     s0WM2: positive('s0WM2', 'W/m²').optional(),
-    tolerances: tolerancesSchema.default({ relTol: 1e-10, absTol: 1e-4 }),
+    tolerances: tolerancesSchema.default({ relTol: 1e-10, absTol: 1e-9 }),
     /** Reaction-wheel momentum budget. */
     momentum: z
       .object({

@@ -40,7 +40,7 @@ for (let i = 0; i < 7; i += 1) {
   last = propagate(run.request);
   best = Math.min(best, last.stats.wallMs);
 }
-const reference = propagate(buildScenarioRun({ ...geoScenario, tolerances: { ...geoScenario.tolerances, relTol: 1e-13, absTol: 1e-7 } }, geo.vehicle).request);
+const reference = propagate(buildScenarioRun({ ...geoScenario, tolerances: { ...geoScenario.tolerances, relTol: 1e-13, absTol: 1e-12 } }, geo.vehicle).request);
 const a = endPosition(last!);
 const b = endPosition(reference);
 console.log(
