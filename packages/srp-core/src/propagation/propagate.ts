@@ -88,9 +88,21 @@ export function propagate(req: PropagationRequest): PropagationResult {
     for (let i = 0; i < 6; i += 1) samples[o + 1 + i] = state[i]!;
     if (req.srp) {
       req.srp.detail(detail, t, state);
-      samples.set(detail.accelInertial, o + layout.srpAccelInertial);
-      samples.set(detail.accelBody, o + layout.srpAccelBody);
-      samples.set(detail.torqueBody, o + layout.srpTorqueBody);
+      const ai = detail.accelInertial;
+      const ab = detail.accelBody;
+      const tb = detail.torqueBody;
+      const oa = o + layout.srpAccelInertial;
+      const ob = o + layout.srpAccelBody;
+      const ot = o + layout.srpTorqueBody;
+      samples[oa] = ai[0];
+      samples[oa + 1] = ai[1];
+      samples[oa + 2] = ai[2];
+      samples[ob] = ab[0];
+      samples[ob + 1] = ab[1];
+      samples[ob + 2] = ab[2];
+      samples[ot] = tb[0];
+      samples[ot + 1] = tb[1];
+      samples[ot + 2] = tb[2];
       samples[o + layout.illuminatedFraction] = detail.illuminatedFraction;
       samples[o + layout.sunDistanceM] = detail.sunDistanceM;
     } else {
