@@ -115,6 +115,10 @@ function fullModel(): void {
   f(dydt, times[i]! + nudge[0]!, states[i]!);
   sink[0] = sink[0]! + dydt[3]!;
 }
+// Warm-up of 1.5 s before the first timing: on the 2-core development VM the first second runs
+// about half as fast (background JIT compilation sharing the core; the reference loop shows it).
+for (const start = performance.now(); performance.now() - start < 1500; ) for (let i = 0; i < 1000; i += 1) fullModel();
+console.log(`reference loop after warm-up: ${referenceLoopNs().toFixed(2)} ns per iteration`);
 let full = measure(FULL_LABEL, 1, fullModel);
 const a: Vec3 = [0, 0, 0];
 for (const force of forces) {

@@ -10,7 +10,7 @@
  * Mathematics and Methods of Astrodynamics, 1987/1999, §8.4, eq. 8.60 or near it, from memory;
  * the identity is re-derived here and checked against the plain difference in the tests).
  * Why: near the Earth the two terms of the Sun's pull are each 5.9e-3 m/s² and differ by
- * ~3.5e-6 m/s² at GEO (less in LEO), so the plain difference loses three to four digits to
+ * ~3.3e-6 m/s² at GEO (less in LEO), so the plain difference loses three to four digits to
  * cancellation; Battin's form loses none, at the same cost.
  */
 import { planetGm, type HeliocentricEphemeris } from '../../bodies/heliocentric-ephemeris';
