@@ -23,6 +23,7 @@ import { EARTH_EQUATORIAL_RADIUS, MOON_RADIUS, SUN_RADIUS } from '../bodies/body
 import { SrpError } from '../errors';
 import type { ReadonlyVec3, Vec3 } from '../math/vec3';
 import { apparentDiscs, createApparentDiscs } from '../radiation/shadow';
+import { brentRoot, createRootBracket } from './integrator/brent-root';
 
 /** Bodies that can eclipse the Sun for a spacecraft in Earth orbit. */
 export const occultingBodies = ['earth', 'moon'] as const;
@@ -131,75 +132,11 @@ function evaluate(
   return out;
 }
 
-/**
- * Brent's root finder on [a, b] with f(a), f(b) of opposite signs (or one zero).
- * Source: Brent (1973), ch. 4, procedure "zero" (from memory); as in Numerical Recipes §9.3.
- */
-function brentRoot(f: (t: number) => number, a0: number, b0: number, fa0: number, fb0: number, tol: number): number {
-  let a = a0;
-  let b = b0;
-  let fa = fa0;
-  let fb = fb0;
-  if (fa === 0) return a;
-  if (fb === 0) return b;
-  let c = a;
-  let fc = fa;
-  let d = b - a;
-  let e = d;
-  for (let iter = 0; iter < 200; iter += 1) {
-    if ((fb > 0 && fc > 0) || (fb < 0 && fc < 0)) {
-      c = a;
-      fc = fa;
-      d = b - a;
-      e = d;
-    }
-    if (Math.abs(fc) < Math.abs(fb)) {
-      a = b;
-      b = c;
-      c = a;
-      fa = fb;
-      fb = fc;
-      fc = fa;
-    }
-    const tol1 = 2 * Number.EPSILON * Math.abs(b) + 0.5 * tol;
-    const xm = 0.5 * (c - b);
-    if (Math.abs(xm) <= tol1 || fb === 0) return b;
-    if (Math.abs(e) >= tol1 && Math.abs(fa) > Math.abs(fb)) {
-      // Inverse quadratic interpolation, or secant when only two points are distinct.
-      const s = fb / fa;
-      let p: number;
-      let q: number;
-      if (a === c) {
-        p = 2 * xm * s;
-        q = 1 - s;
-      } else {
-        const qq = fa / fc;
-        const r = fb / fc;
-        p = s * (2 * xm * qq * (qq - r) - (b - a) * (r - 1));
-        q = (qq - 1) * (r - 1) * (s - 1);
-      }
-      if (p > 0) q = -q;
-      p = Math.abs(p);
-      if (2 * p < Math.min(3 * xm * q - Math.abs(tol1 * q), Math.abs(e * q))) {
-        e = d;
-        d = p / q;
-      } else {
-        d = xm;
-        e = d;
-      }
-    } else {
-      d = xm;
-      e = d;
-    }
-    a = b;
-    fa = fb;
-    b += Math.abs(d) > tol1 ? d : xm > 0 ? tol1 : -tol1;
-    fb = f(b);
-  }
-  throw new SrpError('not_converged', `eclipse event root finding did not converge in [${a0}, ${b0}] s`, {
-    field: 'tSeconds',
-    value: [a0, b0],
-  });
+const bracket = createRootBracket();
+
+/** Brent's method (integrator/brent-root.ts) for a root of f on [a, b], f(a) and f(b) of opposite signs. */
+function rootOf(f: (t: number) => number, a: number, b: number, fa: number, fb: number, tol: number): number {
+  return brentRoot(bracket, f, a, b, fa, fb, tol).root;
 }
 
 /** Golden-section search for the minimum of f on [a, b] to tolerance tol; returns its abscissa. */
@@ -311,7 +248,7 @@ export function findEclipseEvents(
         const t0 = times[i] as number;
         const t1 = times[i + 1] as number;
         if (f0 >= 0 !== f1 >= 0) {
-          const t = brentRoot(fn, t0, t1, f0, f1, tol);
+          const t = rootOf(fn, t0, t1, f0, f1, tol);
           push(kindOf(t, f0 >= 0), t);
         }
         if (i === 0) continue;
@@ -331,8 +268,8 @@ export function findEclipseEvents(
         const tMin = goldenMin(g, tm, t1, tol);
         const gMin = g(tMin);
         if (gMin >= 0) continue;
-        const tA = brentRoot(fn, tm, tMin, fm, sign * gMin, tol);
-        const tB = brentRoot(fn, tMin, t1, sign * gMin, f1, tol);
+        const tA = rootOf(fn, tm, tMin, fm, sign * gMin, tol);
+        const tB = rootOf(fn, tMin, t1, sign * gMin, f1, tol);
         push(kindOf(tA, sign > 0), tA);
         push(kindOf(tB, sign < 0), tB);
       }

@@ -24,7 +24,7 @@ export const EARTH_ROTATION_RATE = 7.292115e-5;
  * ρ(h) = ρ0 exp(−(h − h0)/H) in the band h0 ≤ h < next h0.
  * Source: Vallado, Fundamentals of Astrodynamics and Applications, 4th ed. (2013), Table 8-4
  * "Exponential atmospheric model" (after the CIRA-72 / U.S. Standard Atmosphere 1976 values;
- * table number from memory, values checked against several independent transcriptions).
+ * table number from memory, values checked against several independent copies).
  */
 export const EXPONENTIAL_ATMOSPHERE_TABLE: readonly (readonly [number, number, number])[] = [
   [0, 1.225, 7.249],
