@@ -52,7 +52,10 @@ export interface PropagationResult {
  * Cowell's method: integrates the sum of the forces with DOP853 (adaptive, with dense output), locating
  * events on the dense output and stepping onto the `restart` ones (eclipse edges), and fills a
  * sample row at every output time from the dense output, so the output step never changes the
- * trajectory. Sample rows also record the SRP detail and each force's acceleration magnitude.
+ * trajectory. Sample rows also record the SRP detail (evaluated at the row) and each force's
+ * acceleration magnitude: SRP's exact; the others evaluated at the integrator's step points and
+ * interpolated linearly in time between them (they are smooth within a step: eclipse edges, where
+ * SRP has its kinks, are step points), which keeps a 60 s output of a long run cheap.
  * @throws SrpError `out_of_range` for a bad span or step, and as the integrator and forces do
  */
 export function propagate(req: PropagationRequest): PropagationResult {
@@ -82,6 +85,13 @@ export function propagate(req: PropagationRequest): PropagationResult {
   const y = new Float64Array(6);
   const accel: Vec3 = [0, 0, 0];
   const detail = createSrpDetail();
+  const nForces = req.forces.length;
+  const srpIndex = req.srp ? req.forces.indexOf(req.srp) : -1;
+  // Force magnitudes at the start and end of the current step (interpolated for the rows inside it).
+  let magStart = new Float64Array(nForces);
+  let magEnd = new Float64Array(nForces);
+  let stepStart = 0;
+  let stepSpan = 0;
   const fill = (k: number, t: number, state: Float64Array) => {
     const o = k * stride;
     samples[o] = t;
@@ -108,19 +118,30 @@ export function propagate(req: PropagationRequest): PropagationResult {
     } else {
       samples[o + layout.illuminatedFraction] = 1;
     }
-    for (let i = 0; i < req.forces.length; i += 1) {
-      const force = req.forces[i]!;
-      if (force === req.srp) {
-        // Already evaluated for the detail columns.
+    // Force magnitudes: SRP exactly (from the detail above); the others interpolated linearly in
+    // time between the integrator's step points (see `stepMagnitudes`), which costs nothing per row.
+    const w = stepSpan > 0 ? (t - stepStart) / stepSpan : 1;
+    for (let i = 0; i < nForces; i += 1) {
+      if (i === srpIndex) {
         const a = detail.accelInertial;
         samples[o + layout.forceAccel + i] = Math.sqrt(a[0] * a[0] + a[1] * a[1] + a[2] * a[2]);
-        continue;
+      } else {
+        samples[o + layout.forceAccel + i] = magStart[i]! + w * (magEnd[i]! - magStart[i]!);
       }
-      force.acceleration(accel, t, state);
-      samples[o + layout.forceAccel + i] = Math.sqrt(accel[0] * accel[0] + accel[1] * accel[1] + accel[2] * accel[2]);
     }
   };
 
+  /** Each force's acceleration magnitude (m/s²) at a step point, into `into`. */
+  const stepMagnitudes = (into: Float64Array, t: number, state: Float64Array) => {
+    for (let i = 0; i < nForces; i += 1) {
+      if (i === srpIndex) continue;
+      req.forces[i]!.acceleration(accel, t, state);
+      into[i] = Math.sqrt(accel[0] * accel[0] + accel[1] * accel[1] + accel[2] * accel[2]);
+    }
+  };
+
+  stepMagnitudes(magStart, 0, req.state0);
+  magEnd.set(magStart);
   fill(0, 0, req.state0);
   let next = 1;
   let lastPercent = 0;
@@ -133,12 +154,18 @@ export function propagate(req: PropagationRequest): PropagationResult {
     }
     integrator.step(span);
     for (const e of locator.afterStep()) events.push({ name: e.name, tSeconds: e.t });
+    stepStart = integrator.tPrev;
+    stepSpan = integrator.t - integrator.tPrev;
+    stepMagnitudes(magEnd, integrator.t, integrator.y);
     while (next < rows && sampleTime(next) <= integrator.t) {
       const t = sampleTime(next);
       integrator.denseAt(y, t);
       fill(next, t, y);
       next += 1;
     }
+    const swap = magStart;
+    magStart = magEnd;
+    magEnd = swap;
     if (req.onProgress) {
       const percent = Math.floor((100 * integrator.t) / span);
       if (percent > lastPercent) {
