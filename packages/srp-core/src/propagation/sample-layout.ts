@@ -5,7 +5,8 @@ import { SrpError } from '../errors';
  * at k·stride). Columns, in order: t (s from epoch), r (3, m, inertial EQJ), v (3, m/s, inertial
  * EQJ), SRP acceleration inertial (3, m/s²), SRP acceleration body (3, m/s²), SRP torque body
  * (3, N·m), illuminated fraction (0..1), Sun distance (m), then one acceleration magnitude
- * (m/s²) per force, in `forceNames` order.
+ * (m/s²) per force, in `forceNames` order (from `propagate`: SRP's evaluated at the row, the
+ * others interpolated linearly between the integrator's step points, within about 1 %).
  */
 export interface SampleLayout {
   /** Numbers per row. */
