@@ -102,6 +102,15 @@ export const scenarioSchema = z
         dumpThresholdFraction: z.number().gt(0, 'dumpThresholdFraction must be in (0, 1]').max(1, 'dumpThresholdFraction must be in (0, 1]'),
       })
       .optional(),
+    /** Extra events to locate (eclipse edges are always located when SRP uses a shadow model). */
+    events: z
+      .object({
+        /** Equator crossings (ascending and descending nodes, EQJ equator). */
+        nodes: z.boolean().default(false),
+        /** Radii (km from the central body's centre) whose crossings are reported, up and down. */
+        radiiKm: z.array(positive('events.radiiKm', 'km')).max(16, 'events.radiiKm takes at most 16 radii').default([]),
+      })
+      .default({ nodes: false, radiiKm: [] }),
     /** Sail mission target. */
     sail: z.object({ targetRadiusAu: positive('sail.targetRadiusAu', 'AU') }).optional(),
     /** Budget lines with their requirements and margin policies. */

@@ -14,6 +14,8 @@ import {
   createSrpForce,
   createSunThirdBodyForce,
   createZonalForce,
+  createNodeCrossingEvents,
+  createRadiusCrossingEvents,
   SOLAR_CONSTANT,
   type AttitudeLaw,
   type AttitudeProfile,
@@ -97,6 +99,9 @@ export function buildScenarioRun(scenario: Scenario, vehicleSpec: VehicleSpec, a
       forces.push(srp);
     }
   }
+
+  if (scenario.events.nodes) events.push(...createNodeCrossingEvents());
+  for (const km of scenario.events.radiiKm) events.push(...createRadiusCrossingEvents(km * 1000, `radius-${km}km`));
 
   const request: PropagationRequest = {
     epoch: orbit.epoch,

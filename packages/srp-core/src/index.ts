@@ -255,3 +255,4 @@ export { EPHEMERIS_CSV_COLUMNS, ephemerisCsvHeader, ephemerisCsvChunks, ephemeri
 export type { EphemerisCsvOptions, ParsedEphemerisCsv } from './exports/csv-ephemeris';
 export { OEM_MANDATORY_HEADER_KEYWORDS, OEM_MANDATORY_METADATA_KEYWORDS, oemChunks, oemText, parseOem } from './exports/oem';
 export type { OemOptions, OemSegment, ParsedOem } from './exports/oem';
+export { createNodeCrossingEvents, createRadiusCrossingEvents } from './propagation/orbit-events';
