@@ -90,7 +90,28 @@ export function sunPointingAttitude(
   sunPosEci: ReadonlyVec3,
 ): Quat {
   satToSunUnit(sunDirScratch, sunPosEci, rSatEci);
-  const fellBack = perpendicularReference(secondaryScratch, law.secondaryReference, sunDirScratch, rSatEci, vSatEci);
+  return sunPointingAttitudeFromSunDir(out, law, rSatEci, vSatEci, sunDirScratch);
+}
+
+/**
+ * `sunPointingAttitude` for a caller that already holds the unit spacecraft-to-Sun direction
+ * (the SRP force computes it for the pressure): the same attitude without a second square root.
+ * Allocates nothing; sets `law.usedFallback`.
+ * @param out receives the attitude quaternion (EQJ axes onto body axes)
+ * @param rSatEci spacecraft position relative to the central body (m), EQJ
+ * @param vSatEci spacecraft velocity relative to the central body (m/s), EQJ
+ * @param satToSunEci unit vector from the spacecraft to the Sun, EQJ (as `satToSunUnit` gives it)
+ * @returns out
+ * @throws SrpError `invalid_input` naming `rSatEci` or `vSatEci` for unusable state
+ */
+export function sunPointingAttitudeFromSunDir(
+  out: Quat,
+  law: SunPointingLaw,
+  rSatEci: ReadonlyVec3,
+  vSatEci: ReadonlyVec3,
+  satToSunEci: ReadonlyVec3,
+): Quat {
+  const fellBack = perpendicularReference(secondaryScratch, law.secondaryReference, satToSunEci, rSatEci, vSatEci);
   (law as { usedFallback: boolean }).usedFallback = fellBack;
-  return alignTriad(out, sunDirScratch, secondaryScratch, law.bodyTriadConj);
+  return alignTriad(out, satToSunEci, secondaryScratch, law.bodyTriadConj);
 }

@@ -392,5 +392,55 @@ export function earthMoonShadowFraction(
     return moonPosEci ? cylindricalShadowFraction(rSatEci, sunPosEci, moonPosEci, MOON_RADIUS) : 1;
   }
   if (!moonPosEci) return conicalShadowFraction(rSatEci, sunPosEci, ORIGIN, EARTH_EQUATORIAL_RADIUS);
+  if (earthAndMoonClearOfSun(rSatEci, sunPosEci, moonPosEci)) return 1;
   return twoBodyConicalShadowFraction(rSatEci, sunPosEci, ORIGIN, EARTH_EQUATORIAL_RADIUS, moonPosEci, MOON_RADIUS);
+}
+
+// The radii as module constants: under tsx an imported binding is a getter call on every read.
+const SUN_R = SUN_RADIUS;
+const EARTH_R = EARTH_EQUATORIAL_RADIUS;
+const MOON_R = MOON_RADIUS;
+
+/**
+ * True when neither the Earth's disc (centred at the origin) nor the Moon's touches the solar
+ * disc seen from the spacecraft (c ≥ a + b for both): the full-Sun answer of
+ * `twoBodyConicalShadowFraction`, reached with the Sun's terms computed once. The tests are
+ * `conicalShadowFraction`'s, written identically, so the decision is the same to the bit. A Moon
+ * behind the spacecraft (u · v < 0, c > 90°) with sin²a and sin²b below 1/4 (a + b < 60°, far
+ * from any rounding) is passed without its square roots.
+ */
+function earthAndMoonClearOfSun(rSat: ReadonlyVec3, sunPos: ReadonlyVec3, moonPos: ReadonlyVec3): boolean {
+  const rx = rSat[0];
+  const ry = rSat[1];
+  const rz = rSat[2];
+  const ux = sunPos[0] - rx;
+  const uy = sunPos[1] - ry;
+  const uz = sunPos[2] - rz;
+  const du2 = ux * ux + uy * uy + uz * uz;
+  const invDu = 1 / Math.sqrt(du2);
+  const sinA = Math.min(1, SUN_R * invDu);
+  const cosA = Math.sqrt(1 - sinA * sinA);
+  // The Earth: v = 0 − r.
+  const ex = 0 - rx;
+  const ey = 0 - ry;
+  const ez = 0 - rz;
+  const de2 = ex * ex + ey * ey + ez * ez;
+  if (de2 <= EARTH_R * EARTH_R) return false;
+  const invDe = 1 / Math.sqrt(de2);
+  const sinE = Math.min(1, EARTH_R * invDe);
+  const cosE = Math.sqrt(1 - sinE * sinE);
+  if (!((ux * ex + uy * ey + uz * ez) * invDu * invDe <= cosA * cosE - sinA * sinE)) return false;
+  // The Moon.
+  const mx = moonPos[0] - rx;
+  const my = moonPos[1] - ry;
+  const mz = moonPos[2] - rz;
+  const dm2 = mx * mx + my * my + mz * mz;
+  const rm2 = MOON_R * MOON_R;
+  if (dm2 <= rm2) return false;
+  const dot = ux * mx + uy * my + uz * mz;
+  if (dot < 0 && SUN_R * SUN_R < 0.25 * du2 && rm2 < 0.25 * dm2) return true;
+  const invDm = 1 / Math.sqrt(dm2);
+  const sinM = Math.min(1, MOON_R * invDm);
+  const cosM = Math.sqrt(1 - sinM * sinM);
+  return dot * invDu * invDm <= cosA * cosM - sinA * sinM;
 }

@@ -13,6 +13,7 @@
  */
 import { attitudeAt, type AttitudeLaw } from '../../attitude/attitude-law';
 import { rotateBodyToInertial, rotateInertialToBody, type Quat } from '../../attitude/quaternion';
+import { sunPointingAttitudeFromSunDir } from '../../attitude/sun-pointing-law';
 import { MOON_RADIUS } from '../../bodies/body-constants';
 import type { GeocentricEphemeris } from '../../bodies/geocentric-ephemeris';
 import { ASTRONOMICAL_UNIT, SOLAR_CONSTANT, SPEED_OF_LIGHT } from '../../constants';
@@ -179,7 +180,9 @@ export function createSrpForce(opts: SrpForceOptions): SrpForce {
     sunDirInertial[0] = dx / distance;
     sunDirInertial[1] = dy / distance;
     sunDirInertial[2] = dz / distance;
-    attitudeAt(q, attitude, t, r, v, sunPos);
+    // The Sun-pointing law reuses the direction just computed (same bits as its own).
+    if (attitude.law === 'sun-pointing') sunPointingAttitudeFromSunDir(q, attitude, r, v, sunDirInertial);
+    else attitudeAt(q, attitude, t, r, v, sunPos);
     rotateInertialToBody(sunDirBody, q, sunDirInertial);
     const nu = illuminated(sunPos, t);
     last[0] = nu;
