@@ -26,6 +26,7 @@ const geo = load('corvina-2-geo-30d.scenario.json');
 const geoScenario = {
   ...geo.scenario,
   outputStepS: 60,
+  events: { nodes: false, radiiKm: [] },
   attitude: { law: 'sun-pointing' as const, sunAxisBody: [1, 0, 0] as [number, number, number], secondaryAxisBody: [0, 0, 1] as [number, number, number], secondaryReference: 'orbit-normal' as const },
 };
 const endPosition = (r: PropagationResult) => {
