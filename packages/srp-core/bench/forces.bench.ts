@@ -20,7 +20,7 @@ import type { Vec3 } from '../src/math/vec3';
 import { parseUtcEpoch } from '../src/time/epoch';
 import { compileVehicle } from '../src/vehicles/compile-vehicle';
 import type { PlateVehicleSpec } from '../src/vehicles/vehicle-spec';
-import { measure } from './measure';
+import { measure, referenceLoopNs } from './measure';
 
 const DEG = Math.PI / 180;
 const MU = 3.986004418e14;
@@ -97,15 +97,6 @@ const sink = new Float64Array(1);
 let k = 0;
 const nudge = new Float64Array(1); // a fresh time every call, even after the 1024 samples wrap round
 
-/** A fixed arithmetic loop (ns per iteration) to tell a loaded machine from slow code (see vehicles.bench.ts). */
-function referenceLoopNs(): number {
-  let acc = 0;
-  const start = performance.now();
-  for (let i = 0; i < 20_000_000; i += 1) acc += (i & 7) * 0.5;
-  const ns = ((performance.now() - start) * 1e6) / 20_000_000;
-  sink[0] = sink[0]! + acc;
-  return ns;
-}
 console.log(`reference loop before: ${referenceLoopNs().toFixed(2)} ns per iteration`);
 
 const FULL_LABEL = 'full force model (central + J2..J6 + Sun + Moon + SRP 10 plates, conical Earth+Moon shadow)';

@@ -19,3 +19,18 @@ export function measure(label: string, opsPerCall: number, fn: () => void, minMs
   console.log(`${label}: ${(best / 1e6).toFixed(2)} million/s (${(1e9 / best).toFixed(1)} ns each, best of 5)`);
   return best;
 }
+
+const referenceSink = new Float64Array(1);
+
+/**
+ * A fixed arithmetic loop (ns per iteration): this machine's speed swings about 2× over minutes,
+ * and printing this beside a figure tells a slow stretch from slow code.
+ */
+export function referenceLoopNs(): number {
+  let acc = 0;
+  const start = performance.now();
+  for (let i = 0; i < 20_000_000; i += 1) acc += (i & 7) * 0.5;
+  const ns = ((performance.now() - start) * 1e6) / 20_000_000;
+  referenceSink[0] = referenceSink[0]! + acc;
+  return ns;
+}

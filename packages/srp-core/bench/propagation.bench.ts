@@ -12,6 +12,7 @@ import { fileURLToPath } from 'node:url';
 import { scenarioSchema, vehicleSpecSchema } from '@photon-ledger/shared';
 import { buildScenarioRun, vehicleFromFile } from '../io/index';
 import { createDynamics, propagate, type PropagationResult } from '../src/index';
+import { referenceLoopNs } from './measure';
 
 const fixtures = path.resolve(path.dirname(fileURLToPath(import.meta.url)), '../../../fixtures');
 const load = (name: string) => {
@@ -34,6 +35,7 @@ const endPosition = (r: PropagationResult) => {
   return [r.samples[o + 1]!, r.samples[o + 2]!, r.samples[o + 3]!];
 };
 
+console.log(`reference loop before: ${referenceLoopNs().toFixed(2)} ns per iteration (lower is a faster stretch)`);
 let best = Infinity;
 let last: PropagationResult | null = null;
 for (let i = 0; i < 7; i += 1) {
@@ -41,6 +43,7 @@ for (let i = 0; i < 7; i += 1) {
   last = propagate(run.request);
   best = Math.min(best, last.stats.wallMs);
 }
+console.log(`reference loop after: ${referenceLoopNs().toFixed(2)} ns per iteration`);
 const reference = propagate(buildScenarioRun({ ...geoScenario, tolerances: { ...geoScenario.tolerances, relTol: 1e-13, absTol: 1e-12 } }, geo.vehicle).request);
 const a = endPosition(last!);
 const b = endPosition(reference);
