@@ -3,35 +3,7 @@ import type { ReadonlyVec3 } from '../math/vec3';
 import { attitudeAt, createAttitudeLaw } from './attitude-law';
 import { createLvlhLaw, lvlhAttitude, lvlhQuat } from './lvlh-law';
 import { createQuat } from './quaternion';
-import type { ReadonlyQuat } from './quaternion';
-
-// Independent check of the product convention: v_inertial = q ⊗ (0, v) ⊗ conj(q), written out here.
-function bodyToInertial(q: ReadonlyQuat, v: ReadonlyVec3): [number, number, number] {
-  const [w, x, y, z] = q;
-  const pw = -x * v[0] - y * v[1] - z * v[2];
-  const px = w * v[0] + y * v[2] - z * v[1];
-  const py = w * v[1] - x * v[2] + z * v[0];
-  const pz = w * v[2] + x * v[1] - y * v[0];
-  return [
-    -pw * x + px * w - py * z + pz * y,
-    -pw * y + px * z + py * w - pz * x,
-    -pw * z - px * y + py * x + pz * w,
-  ];
-}
-const cross = (a: ReadonlyVec3, b: ReadonlyVec3): [number, number, number] => [
-  a[1] * b[2] - a[2] * b[1],
-  a[2] * b[0] - a[0] * b[2],
-  a[0] * b[1] - a[1] * b[0],
-];
-const unit = (a: ReadonlyVec3): [number, number, number] => {
-  const n = Math.hypot(a[0], a[1], a[2]);
-  return [a[0] / n, a[1] / n, a[2] / n];
-};
-const dot = (a: ReadonlyVec3, b: ReadonlyVec3): number => a[0] * b[0] + a[1] * b[1] + a[2] * b[2];
-
-function expectVec(actual: ReadonlyVec3, expected: ReadonlyVec3, tol: number): void {
-  for (let i = 0; i < 3; i += 1) expect(Math.abs(actual[i]! - expected[i]!)).toBeLessThan(tol);
-}
+import { bodyToInertial, cross, unit, dot, expectVec } from './attitude-test-helpers';
 
 // Tolerance 1e-12 on unit vectors: a few dozen double-precision operations on unit-size values.
 const TOL = 1e-12;

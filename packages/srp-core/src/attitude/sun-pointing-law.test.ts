@@ -6,34 +6,7 @@ import type { ReadonlyQuat } from './quaternion';
 import { secondaryReferences } from './reference-direction';
 import type { SecondaryReference } from './reference-direction';
 import { createSunPointingLaw, sunPointingAttitude } from './sun-pointing-law';
-
-// Independent check of the product convention (quaternion.ts header): v_inertial = q ⊗ v ⊗ conj(q),
-// written out here with the Hamilton product rather than calling the code under test.
-function bodyToInertial(q: ReadonlyQuat, v: ReadonlyVec3): [number, number, number] {
-  const [w, x, y, z] = q;
-  // p = q ⊗ (0, v)
-  const pw = -x * v[0] - y * v[1] - z * v[2];
-  const px = w * v[0] + y * v[2] - z * v[1];
-  const py = w * v[1] - x * v[2] + z * v[0];
-  const pz = w * v[2] + x * v[1] - y * v[0];
-  // p ⊗ conj(q), vector part
-  return [
-    -pw * x + px * w - py * z + pz * y,
-    -pw * y + px * z + py * w - pz * x,
-    -pw * z - px * y + py * x + pz * w,
-  ];
-}
-
-const dot = (a: ReadonlyVec3, b: ReadonlyVec3): number => a[0] * b[0] + a[1] * b[1] + a[2] * b[2];
-const cross = (a: ReadonlyVec3, b: ReadonlyVec3): [number, number, number] => [
-  a[1] * b[2] - a[2] * b[1],
-  a[2] * b[0] - a[0] * b[2],
-  a[0] * b[1] - a[1] * b[0],
-];
-const unit = (a: ReadonlyVec3): [number, number, number] => {
-  const n = Math.hypot(a[0], a[1], a[2]);
-  return [a[0] / n, a[1] / n, a[2] / n];
-};
+import { bodyToInertial, cross, unit, dot } from './attitude-test-helpers';
 
 /** Reproducible pseudo-random numbers in [0, 1) (mulberry32; common practice for seeded tests). */
 function rng(seed: number): () => number {

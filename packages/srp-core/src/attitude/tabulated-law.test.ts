@@ -4,20 +4,7 @@ import { attitudeAt, createAttitudeLaw } from './attitude-law';
 import { createQuat } from './quaternion';
 import type { ReadonlyQuat } from './quaternion';
 import { createTabulatedLaw, tabulatedAttitude } from './tabulated-law';
-
-// Independent check of the product convention: v_inertial = q ⊗ (0, v) ⊗ conj(q), written out here.
-function bodyToInertial(q: ReadonlyQuat, v: ReadonlyVec3): [number, number, number] {
-  const [w, x, y, z] = q;
-  const pw = -x * v[0] - y * v[1] - z * v[2];
-  const px = w * v[0] + y * v[2] - z * v[1];
-  const py = w * v[1] - x * v[2] + z * v[0];
-  const pz = w * v[2] + x * v[1] - y * v[0];
-  return [
-    -pw * x + px * w - py * z + pz * y,
-    -pw * y + px * z + py * w - pz * x,
-    -pw * z - px * y + py * x + pz * w,
-  ];
-}
+import { bodyToInertial } from './attitude-test-helpers';
 
 /** Rodrigues' formula: v rotated by angle θ about unit axis k (source: textbook formula, from memory). */
 function rodrigues(v: ReadonlyVec3, k: ReadonlyVec3, theta: number): [number, number, number] {
