@@ -21,46 +21,12 @@ import { parseUtcEpoch } from '../src/time/epoch';
 import { compileVehicle } from '../src/vehicles/compile-vehicle';
 import type { PlateVehicleSpec } from '../src/vehicles/vehicle-spec';
 import { measure, referenceLoopNs } from './measure';
+import { benchBoxWing as boxWing } from './bench-vehicles';
 
 const DEG = Math.PI / 180;
 const MU = 3.986004418e14;
 
 /** The demo GEO box-wing (fixtures/vehicles/corvina-2: same plates and optics, written in SI here). */
-const boxWing: PlateVehicleSpec = {
-  kind: 'plates',
-  name: 'bench GEO box-wing',
-  massKg: 4200,
-  centreOfMassM: [0.04, -0.03, -0.15],
-  plates: [
-    { name: '+x', areaM2: 6.6, normal: [1, 0, 0], centroidM: [1.2, 0, 0], front: 'mli-kapton' },
-    { name: '-x', areaM2: 6.6, normal: [-1, 0, 0], centroidM: [-1.2, 0, 0], front: 'mli-kapton' },
-    { name: '+y', areaM2: 7.2, normal: [0, 1, 0], centroidM: [0, 1.1, 0], front: 'osr-radiator' },
-    { name: '-y', areaM2: 7.2, normal: [0, -1, 0], centroidM: [0, -1.1, 0], front: 'osr-radiator' },
-    { name: '+z', areaM2: 5.28, normal: [0, 0, 1], centroidM: [0, 0, 1.5], front: 'mli-kapton' },
-    { name: '-z', areaM2: 5.28, normal: [0, 0, -1], centroidM: [0, 0, -1.5], front: 'mli-kapton' },
-    {
-      name: 'north wing',
-      areaM2: 35.2,
-      normal: [1, 0, 0],
-      centroidM: [0, 9.5, 0],
-      front: 'solar-cell',
-      back: 'solar-array-back',
-      trackingAxis: [0, 1, 0],
-    },
-    {
-      name: 'south wing',
-      areaM2: 35.2,
-      normal: [1, 0, 0],
-      centroidM: [0, -9.5, 0],
-      front: 'solar-cell',
-      back: 'solar-array-back',
-      trackingAxis: [0, -1, 0],
-      trackingLimitsRad: [-170 * DEG, 170 * DEG],
-    },
-    { name: 'reflector', areaM2: 5.31, normal: [0, 0, 1], centroidM: [1.8, 0, 2.2], front: 'white-paint', back: 'black-paint' },
-    { name: 'sunshade', areaM2: 1.2, normal: [1, 0, 0], centroidM: [1.6, 0.4, 1.8], front: 'white-paint' },
-  ],
-};
 
 const epoch = parseUtcEpoch('2026-03-20T00:00:00Z'); // equinox season: GEO eclipses occur
 const DAY = 86_400;

@@ -5,6 +5,7 @@
  * Target: ≥ 5 million 10-plate evaluations per second.
  */
 import { measure } from './measure';
+import { benchBoxWing as boxWing } from './bench-vehicles';
 import { compileVehicle } from '../src/vehicles/compile-vehicle';
 import { createSrpResult, evaluateSrp } from '../src/vehicles/evaluate-srp';
 import type { PlateVehicleSpec, SailSpec } from '../src/vehicles/vehicle-spec';
@@ -13,41 +14,6 @@ import type { Vec3 } from '../src/math/vec3';
 
 const DEG = Math.PI / 180;
 
-const boxWing: PlateVehicleSpec = {
-  kind: 'plates',
-  name: 'bench box-wing',
-  massKg: 4200,
-  centreOfMassM: [0.05, -0.02, 1.4],
-  plates: [
-    { name: '+x', areaM2: 6.6, normal: [1, 0, 0], centroidM: [1.2, 0, 1.5], front: 'mli-kapton' },
-    { name: '-x', areaM2: 6.6, normal: [-1, 0, 0], centroidM: [-1.2, 0, 1.5], front: 'mli-kapton' },
-    { name: '+y', areaM2: 7.2, normal: [0, 1, 0], centroidM: [0, 1.1, 1.5], front: 'osr-radiator' },
-    { name: '-y', areaM2: 7.2, normal: [0, -1, 0], centroidM: [0, -1.1, 1.5], front: 'osr-radiator' },
-    { name: '+z', areaM2: 5.28, normal: [0, 0, 1], centroidM: [0, 0, 3], front: 'mli-kapton' },
-    { name: '-z', areaM2: 5.28, normal: [0, 0, -1], centroidM: [0, 0, 0], front: 'mli-kapton' },
-    {
-      name: 'wing +y',
-      areaM2: 35,
-      normal: [1, 0, 0],
-      centroidM: [0, 9, 1.5],
-      front: 'solar-cell',
-      back: 'solar-array-back',
-      trackingAxis: [0, 1, 0],
-    },
-    {
-      name: 'wing -y',
-      areaM2: 35,
-      normal: [1, 0, 0],
-      centroidM: [0, -9, 1.5],
-      front: 'solar-cell',
-      back: 'solar-array-back',
-      trackingAxis: [0, -1, 0],
-      trackingLimitsRad: [-150 * DEG, 150 * DEG],
-    },
-    { name: 'reflector', areaM2: 5.31, normal: [0, 0, 1], centroidM: [1.8, 0, 3.2], front: 'white-paint', back: 'black-paint' },
-    { name: 'sunshade', areaM2: 1.2, normal: [1, 0, 0], centroidM: [1.6, 0.4, 2.8], front: 'white-paint' },
-  ],
-};
 
 const sail: SailSpec = {
   kind: 'sail',
