@@ -11,12 +11,24 @@ import { authRoutes } from './routes/auth-routes';
 import { missionRoutes } from './routes/mission-routes';
 import { publicRoutes } from './routes/public-routes';
 import { userRoutes } from './routes/user-routes';
+import { vehicleRoutes } from './routes/vehicle-routes';
+import { scenarioRoutes } from './routes/scenario-routes';
+import { uploadRoutes } from './routes/upload-routes';
+import { auditRoutes } from './routes/audit-routes';
+import { runRoutes } from './routes/run-routes';
+import { resultRoutes } from './routes/result-routes';
+import { requirementRoutes } from './routes/requirement-routes';
+import { exportRoutes } from './routes/export-routes';
+import type { RouteContext } from './routes/route-context';
+import type { JobSender } from './jobs/job-sender';
+import { createJobSender } from './jobs/pg-boss-sender';
 
 /** Version reported by `/api/health`. */
 export const API_VERSION = '0.1.0';
 
 /** Builds the Express application; the caller owns the database connection and the listener. */
-export function createApp(config: Config, sequelize: Sequelize): Express {
+export function createApp(config: Config, sequelize: Sequelize, jobs: JobSender = createJobSender(config.PL_DATABASE_URL)): Express {
+  const ctx: RouteContext = { config, sequelize, jobs };
   const app = express();
   app.disable('x-powered-by');
   // Behind a reverse proxy the client address (used by the sign-in rate limit) comes from X-Forwarded-For.
@@ -30,6 +42,14 @@ export function createApp(config: Config, sequelize: Sequelize): Express {
   api.use(requireUser(config.PL_JWT_SECRET));
   api.use(missionRoutes());
   api.use(userRoutes());
+  api.use(vehicleRoutes(ctx));
+  api.use(scenarioRoutes(ctx));
+  api.use(uploadRoutes(ctx));
+  api.use(auditRoutes(ctx));
+  api.use(runRoutes(ctx));
+  api.use(resultRoutes(ctx));
+  api.use(requirementRoutes(ctx));
+  api.use(exportRoutes(ctx));
   api.use((req) => {
     throw new AppError('not_found', `no API route ${req.method} /api${req.path}`);
   });

@@ -91,3 +91,4 @@ export {
   thirdBodyPlanets,
 } from './scenario';
 export type { Scenario } from './scenario';
+export * from './runs';
