@@ -5,7 +5,8 @@ import { migrateUp } from '../src/migrator';
 import { seedDemoData } from '../src/services/seed-service';
 import { dropDatabase, ensureDatabase } from '../scripts/postgres-cluster';
 
-const DB_NAME = 'photon_ledger_api_test';
+// One database per test process: several test runs may share a scratch cluster.
+const DB_NAME = `photon_ledger_api_test_${process.pid}`;
 
 declare module 'vitest' {
   export interface ProvidedContext {

@@ -92,3 +92,6 @@ export {
 } from './scenario';
 export type { Scenario } from './scenario';
 export * from './runs';
+export * from './api-vehicles';
+export * from './api-runs';
+export * from './api-results';
