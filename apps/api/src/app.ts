@@ -10,6 +10,7 @@ import { requireUser } from './middleware/auth';
 import { authRoutes } from './routes/auth-routes';
 import { missionRoutes } from './routes/mission-routes';
 import { publicRoutes } from './routes/public-routes';
+import { openApiRoutes } from './routes/openapi-routes';
 import { userRoutes } from './routes/user-routes';
 import { vehicleRoutes } from './routes/vehicle-routes';
 import { scenarioRoutes } from './routes/scenario-routes';
@@ -38,6 +39,7 @@ export function createApp(config: Config, sequelize: Sequelize, jobs: JobSender 
   api.use(express.json({ limit: '1mb' }));
   api.use(cookieParser());
   api.use(publicRoutes(config, sequelize, API_VERSION));
+  api.use(openApiRoutes(API_VERSION));
   api.use(authRoutes(config));
   api.use(requireUser(config.PL_JWT_SECRET));
   api.use(missionRoutes());
