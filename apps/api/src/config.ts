@@ -32,11 +32,32 @@ export const configSchema = z.object({
   PL_TRUST_PROXY: z.string().default('loopback'),
   /** Jobs a separate worker process runs at once. */
   PL_WORKER_CONCURRENCY: z.coerce.number().int().min(1).max(64).default(1),
+  /**
+   * A running run whose worker has not reported for this many seconds is taken back and queued
+   * again by any live worker (workers report every second).
+   */
+  PL_RUN_STALE_SECONDS: z.coerce
+    .number({ error: 'PL_RUN_STALE_SECONDS must be a number of seconds' })
+    .int('PL_RUN_STALE_SECONDS must be a whole number of seconds')
+    .min(2, 'PL_RUN_STALE_SECONDS must be at least 2 (workers report every second)')
+    .max(3600, 'PL_RUN_STALE_SECONDS must be at most 3600')
+    .default(30),
+  /** How often an idle worker asks the queue for a job (seconds, at least 0.5). */
+  PL_WORKER_POLL_SECONDS: z.coerce
+    .number({ error: 'PL_WORKER_POLL_SECONDS must be a number of seconds' })
+    .min(0.5, 'PL_WORKER_POLL_SECONDS must be at least 0.5')
+    .max(60, 'PL_WORKER_POLL_SECONDS must be at most 60')
+    .default(1),
 });
 export type Config = z.infer<typeof configSchema>;
 
-/** What a separate worker process needs: the database and its concurrency, no HTTP secrets. */
-export const workerConfigSchema = configSchema.pick({ PL_DATABASE_URL: true, PL_WORKER_CONCURRENCY: true });
+/** What a separate worker process needs: the database, its concurrency and the run timings, no HTTP secrets. */
+export const workerConfigSchema = configSchema.pick({
+  PL_DATABASE_URL: true,
+  PL_WORKER_CONCURRENCY: true,
+  PL_RUN_STALE_SECONDS: true,
+  PL_WORKER_POLL_SECONDS: true,
+});
 export type WorkerConfig = z.infer<typeof workerConfigSchema>;
 
 /** Reads and validates the configuration; throws a message naming every bad variable. */

@@ -3,6 +3,7 @@ import { loadConfig } from './config';
 import { createDatabase } from './db';
 import { createApp } from './app';
 import { installProcessHandlers } from './errors/handle-error';
+import { createJobSender } from './jobs/pg-boss-sender';
 import { startWorker, type Worker } from './worker';
 
 installProcessHandlers('api');
@@ -10,9 +11,19 @@ const config = loadConfig();
 const sequelize = createDatabase(config.PL_DATABASE_URL);
 await sequelize.authenticate();
 
-const app = createApp(config, sequelize);
 const worker: Worker | null =
-  config.PL_WORKERS_IN_PROCESS > 0 ? await startWorker(config.PL_DATABASE_URL, config.PL_WORKERS_IN_PROCESS) : null;
+  config.PL_WORKERS_IN_PROCESS > 0
+    ? await startWorker({
+        databaseUrl: config.PL_DATABASE_URL,
+        concurrency: config.PL_WORKERS_IN_PROCESS,
+        staleSeconds: config.PL_RUN_STALE_SECONDS,
+        pollSeconds: config.PL_WORKER_POLL_SECONDS,
+        sequelize,
+      })
+    : null;
+// The in-process worker takes a new run at once instead of at its next poll.
+const jobs = createJobSender(config.PL_DATABASE_URL, { onQueued: () => worker?.wake() });
+const app = createApp(config, sequelize, jobs);
 
 const server = app.listen(config.PL_PORT, config.PL_HOST, () => {
   const { port } = server.address() as AddressInfo;
@@ -22,7 +33,10 @@ const server = app.listen(config.PL_PORT, config.PL_HOST, () => {
 
 async function shutdown(): Promise<void> {
   server.close();
-  await worker?.stop();
+  // Runs in hand get a few seconds to finish; the rest go back to the queue for the next start
+  // (or for another worker).
+  await worker?.stop({ graceMs: 5_000 });
+  await jobs.close();
   await sequelize.close();
   process.exit(0);
 }

@@ -8,6 +8,8 @@ import type { Role } from '@photon-ledger/shared';
 import { configSchema, type Config } from '../src/config';
 import { createDatabase } from '../src/db';
 import { createApp } from '../src/app';
+import { createJobSender } from '../src/jobs/pg-boss-sender';
+import { startWorker, type Worker } from '../src/worker';
 
 /** The real app on port 0 against the test database. */
 export interface ApiHarness {
@@ -15,6 +17,8 @@ export interface ApiHarness {
   baseUrl: string;
   sequelize: Sequelize;
   config: Config;
+  /** The in-process worker, when `PL_WORKERS_IN_PROCESS` was set above 0 (tests default to none). */
+  worker: Worker | null;
   /** A supertest agent signed in as the demo user of that role (cookie kept). */
   signedIn: (role: Role) => Promise<ReturnType<typeof request.agent>>;
   close: () => Promise<void>;
@@ -27,7 +31,10 @@ export function demoUser(role: Role): { email: string; password: string } {
   return u;
 }
 
-/** Starts the app; `env` overrides configuration (e.g. a low sign-in limit). */
+/**
+ * Starts the app; `env` overrides configuration (e.g. a low sign-in limit). Unlike the server, no
+ * worker runs in the process unless `PL_WORKERS_IN_PROCESS` asks for one.
+ */
 export async function startApi(env: Record<string, string> = {}): Promise<ApiHarness> {
   const config = configSchema.parse({
     PL_DATABASE_URL: inject('databaseUrl'),
@@ -35,10 +42,22 @@ export async function startApi(env: Record<string, string> = {}): Promise<ApiHar
     PL_PORT: '0',
     PL_LOGIN_LIMIT: '1000',
     PL_DEMO_MODE: '1',
+    PL_WORKERS_IN_PROCESS: '0',
     ...env,
   });
   const sequelize = createDatabase(config.PL_DATABASE_URL);
-  const app = createApp(config, sequelize);
+  const worker =
+    config.PL_WORKERS_IN_PROCESS > 0
+      ? await startWorker({
+          databaseUrl: config.PL_DATABASE_URL,
+          concurrency: config.PL_WORKERS_IN_PROCESS,
+          staleSeconds: config.PL_RUN_STALE_SECONDS,
+          pollSeconds: config.PL_WORKER_POLL_SECONDS,
+          sequelize,
+        })
+      : null;
+  const jobs = createJobSender(config.PL_DATABASE_URL, { onQueued: () => worker?.wake() });
+  const app = createApp(config, sequelize, jobs);
   const server = await new Promise<Server>((resolve) => {
     const s = app.listen(0, '127.0.0.1', () => resolve(s));
   });
@@ -48,6 +67,7 @@ export async function startApi(env: Record<string, string> = {}): Promise<ApiHar
     baseUrl,
     sequelize,
     config,
+    worker,
     signedIn: async (role) => {
       const agent = request.agent(baseUrl);
       const res = await agent.post('/api/auth/login').send(demoUser(role));
@@ -56,6 +76,9 @@ export async function startApi(env: Record<string, string> = {}): Promise<ApiHar
     },
     close: async () => {
       await new Promise<void>((resolve) => server.close(() => resolve()));
+      // Runs in hand go back to the queue at once (a later worker takes them).
+      await worker?.stop();
+      await jobs.close();
       await sequelize.close();
     },
   };

@@ -256,3 +256,8 @@ export type { EphemerisCsvOptions, ParsedEphemerisCsv } from './exports/csv-ephe
 export { OEM_MANDATORY_HEADER_KEYWORDS, OEM_MANDATORY_METADATA_KEYWORDS, oemChunks, oemText, parseOem } from './exports/oem';
 export type { OemOptions, OemSegment, ParsedOem } from './exports/oem';
 export { createNodeCrossingEvents, createRadiusCrossingEvents } from './propagation/orbit-events';
+export { ephemerisCsvRows, createUtcLabeller } from './exports/csv-ephemeris';
+export type { EphemerisCsvRowOptions } from './exports/csv-ephemeris';
+export { oemHeader, oemDataLines } from './exports/oem';
+export type { OemDataLineOptions } from './exports/oem';
+export { ephemerisCsvRowBytes } from './exports/csv-ephemeris';

@@ -14,7 +14,11 @@ function routesInSource(): string[] {
   for (const file of readdirSync(routesDir).filter((f) => f.endsWith('.ts') && !f.endsWith('.test.ts'))) {
     if (file === 'openapi-routes.ts') continue; // the document and its page describe the others
     const text = readFileSync(path.join(routesDir, file), 'utf8');
-    for (const m of text.matchAll(/router\.(get|post|put|patch|delete)\(\s*'([^']+)'/g)) found.push(`${m[1]} ${m[2]}`);
+    // Paths are literals, or templates on one `const base = '...'` of the file.
+    const base = /const base = '([^']+)'/.exec(text)?.[1] ?? '';
+    for (const m of text.matchAll(/router\.(get|post|put|patch|delete)\(\s*['`]([^'`]+)['`]/g)) {
+      found.push(`${m[1]} ${m[2]!.replace('${base}', base)}`);
+    }
   }
   return found.sort();
 }

@@ -19,6 +19,9 @@ import {
   userSchema,
 } from '@photon-ledger/shared';
 import type { MissionAction } from '../services/mission-access';
+import { inputRoutes } from './catalogue-inputs';
+import { runRoutes } from './catalogue-runs';
+import { resultRoutes } from './catalogue-results';
 
 /**
  * Who may call a route: `public` (no sign-in), `signed-in` (any role), `admin`, `admin-or-lead`,
@@ -38,7 +41,7 @@ export interface RouteDoc {
   query?: z.ZodObject;
   body?: z.ZodType;
   /** multipart/form-data: the form fields besides `file` (the upload itself). */
-  multipart?: z.ZodObject;
+  multipart?: z.ZodType;
   response: {
     status: number;
     /** JSON answer; omitted for 204 and for files. */
@@ -129,4 +132,4 @@ const coreRoutes: RouteDoc[] = [
 ];
 
 /** Every route, in the order the document lists them. */
-export const routeCatalogue: RouteDoc[] = [...coreRoutes];
+export const routeCatalogue: RouteDoc[] = [...coreRoutes, ...inputRoutes, ...runRoutes, ...resultRoutes];

@@ -7,7 +7,7 @@
 import type { Transaction } from 'sequelize';
 import type { AttitudeProfile, PropagationResult, SrpBudget } from '@photon-ledger/srp-core';
 import { computeBudget, EXPORT_CAUTION, formatUtc, INERTIAL_FRAME_LABEL, EPHEMERIS_CSV_COLUMNS, propagate } from '@photon-ledger/srp-core';
-import { buildScenarioRun } from '@photon-ledger/srp-core/io';
+import { buildScenarioRun, vehicleFromFile } from '@photon-ledger/srp-core/io';
 import type { RunEvent, RunSummary, Scenario, VehicleSpec } from '@photon-ledger/shared';
 import { RunResultModel } from '../models';
 import { writeSamples } from './sample-store';
@@ -49,7 +49,8 @@ export function sampleColumns(forceNames: readonly string[]): string[] {
  */
 export function computeRunOutcome(input: RunInput, hooks: RunHooks = {}): RunOutcome | null {
   const { scenario, vehicle } = input;
-  const run = buildScenarioRun(scenario, vehicle, input.attitudeProfile);
+  // The stored spec is the file form (tracking limits in degrees); srp-core takes radians.
+  const run = buildScenarioRun(scenario, vehicleFromFile(vehicle), input.attitudeProfile);
   const result: PropagationResult = propagate({
     ...run.request,
     ...(hooks.onProgress ? { onProgress: hooks.onProgress } : {}),

@@ -13,6 +13,7 @@ import type { SampleHistory } from '../propagation/sample-layout';
 import type { Epoch } from '../time/epoch';
 import { formatUtc, parseUtcEpoch } from '../time/epoch';
 import { EXPORT_CAUTION } from './caution';
+import { createUtcLabeller } from './csv-ephemeris';
 import { formatFixed } from './number-format';
 
 /** Header and metadata values of the message. */
@@ -69,14 +70,7 @@ function kvnValue(value: string, field: string): string {
   return value.trim();
 }
 
-/**
- * Yields the message: header and metadata as the first chunk, then data lines in chunks.
- * @throws SrpError naming the option (`objectName`, `creationDateUtc`, `useableSeconds`, ...) or `samples.k`
- */
-export function* oemChunks(history: SampleHistory, options: OemOptions): Generator<string, void, undefined> {
-  checkHistory(history);
-  const { layout, samples, sampleCount } = history;
-  const rowsPerChunk = options.rowsPerChunk ?? 1000;
+function checkRowsPerChunk(rowsPerChunk: number): void {
   if (!Number.isInteger(rowsPerChunk) || rowsPerChunk < 1) {
     throw new SrpError('out_of_range', `rowsPerChunk must be a whole number of rows, at least 1; got ${rowsPerChunk}`, {
       field: 'rowsPerChunk',
@@ -84,9 +78,18 @@ export function* oemChunks(history: SampleHistory, options: OemOptions): Generat
       limit: '>= 1',
     });
   }
+}
+
+/**
+ * The header and metadata of a one-segment message whose data lines run from `firstSeconds` to
+ * `lastSeconds` (s from the epoch), ending in '\n': what `oemChunks` yields first, for a caller
+ * that streams the data lines piece by piece with `oemDataLines`.
+ * @throws SrpError naming the option (`objectName`, `creationDateUtc`, `useableSeconds`, ...)
+ */
+export function oemHeader(options: OemOptions, firstSeconds: number, lastSeconds: number): string {
   const creation = parseUtcEpoch(options.creationDateUtc ?? new Date().toISOString(), 'creationDateUtc');
-  const tFirst = samples[layout.t] as number;
-  const tLast = samples[(sampleCount - 1) * layout.stride + layout.t] as number;
+  const tFirst = firstSeconds;
+  const tLast = lastSeconds;
   const header = [
     'CCSDS_OEM_VERS = 3.0',
     `COMMENT ${EXPORT_CAUTION}`,
@@ -117,20 +120,24 @@ export function* oemChunks(history: SampleHistory, options: OemOptions): Generat
     meta.push(`USEABLE_START_TIME = ${ccsdsTime(options.epoch, start)}`, `USEABLE_STOP_TIME = ${ccsdsTime(options.epoch, stop)}`);
   }
   meta.push(`STOP_TIME = ${ccsdsTime(options.epoch, tLast)}`, 'META_STOP', '', `COMMENT ${EXPORT_CAUTION}`);
-  yield `${[...header, ...meta].join('\n')}\n`;
+  return `${[...header, ...meta].join('\n')}\n`;
+}
 
+/** The data lines of `history`, unchecked, in chunks of `rowsPerChunk` lines. */
+function* dataLines(history: SampleHistory, epoch: Epoch, rowsPerChunk: number, firstRowIndex: number): Generator<string, void, undefined> {
+  const { layout, samples, sampleCount } = history;
+  const label = createUtcLabeller(epoch);
   let chunk = '';
   let inChunk = 0;
   for (let k = 0; k < sampleCount; k += 1) {
     const o = k * layout.stride;
-    let line = ccsdsTime(options.epoch, samples[o + layout.t] as number);
+    // CCSDS ASCII time code A: the UTC label without its Z (TIME_SYSTEM says UTC).
+    let line = label(samples[o + layout.t] as number).slice(0, -1);
     for (let j = 0; j < 6; j += 1) {
       const x = samples[o + (j < 3 ? layout.r + j : layout.v + j - 3)] as number;
       if (!Number.isFinite(x)) {
-        throw new SrpError('invalid_input', `samples.${k}.${j < 3 ? 'r' : 'v'}.${j % 3} must be a finite number; got ${x}`, {
-          field: `samples.${k}.${j < 3 ? 'r' : 'v'}.${j % 3}`,
-          value: x,
-        });
+        const field = `samples.${firstRowIndex + k}.${j < 3 ? 'r' : 'v'}.${j % 3}`;
+        throw new SrpError('invalid_input', `${field} must be a finite number; got ${x}`, { field, value: x });
       }
       line += ` ${formatFixed(x / 1000, j < 3 ? POSITION_DECIMALS : VELOCITY_DECIMALS)}`;
     }
@@ -143,6 +150,43 @@ export function* oemChunks(history: SampleHistory, options: OemOptions): Generat
     }
   }
   if (inChunk > 0) yield chunk;
+}
+
+/**
+ * Yields the message: header and metadata as the first chunk, then data lines in chunks.
+ * @throws SrpError naming the option (`objectName`, `creationDateUtc`, `useableSeconds`, ...) or `samples.k`
+ */
+export function* oemChunks(history: SampleHistory, options: OemOptions): Generator<string, void, undefined> {
+  checkHistory(history);
+  const { layout, samples, sampleCount } = history;
+  const rowsPerChunk = options.rowsPerChunk ?? 1000;
+  checkRowsPerChunk(rowsPerChunk);
+  const tFirst = samples[layout.t] as number;
+  const tLast = samples[(sampleCount - 1) * layout.stride + layout.t] as number;
+  yield oemHeader(options, tFirst, tLast);
+  yield* dataLines(history, options.epoch, rowsPerChunk, 0);
+}
+
+/** What the data-line generator needs. */
+export interface OemDataLineOptions {
+  /** Scenario epoch (the samples' t = 0). */
+  epoch: Epoch;
+  /** Data lines per yielded chunk, default 1000. */
+  rowsPerChunk?: number;
+  /** Index of the history's first row in the whole run, for error messages (default 0). */
+  firstRowIndex?: number;
+}
+
+/**
+ * Only the data lines ("epoch x y z vx vy vz", km and km/s), in chunks: `oemHeader` followed by
+ * the data lines of consecutive pieces of a run is byte for byte `oemText` of the whole.
+ * @throws SrpError naming `samples.k.r.j` or `samples.k.v.j` (k counted from `firstRowIndex`), or the history's fields
+ */
+export function* oemDataLines(history: SampleHistory, options: OemDataLineOptions): Generator<string, void, undefined> {
+  checkHistory(history);
+  const rowsPerChunk = options.rowsPerChunk ?? 1000;
+  checkRowsPerChunk(rowsPerChunk);
+  yield* dataLines(history, options.epoch, rowsPerChunk, options.firstRowIndex ?? 0);
 }
 
 /** The message as one string (for small runs; stream `oemChunks` for large ones). */

@@ -1,0 +1,87 @@
+/**
+ * Catalogue entries for vehicles, revisions, uploads, scenarios and the audit log.
+ */
+import { z } from 'zod';
+import {
+  auditPageSchema,
+  auditQuerySchema,
+  attitudeProfileUploadResultSchema,
+  missionParamsSchema,
+  plateSetUploadFormSchema,
+  plateSetUploadResultSchema,
+  scenarioBodySchema,
+  scenarioDetailSchema,
+  scenarioListSchema,
+  scenarioRouteParamsSchema,
+  uploadListQuerySchema,
+  uploadListSchema,
+  uploadRouteParamsSchema,
+  vehicleCompareQuerySchema,
+  vehicleCompareSchema,
+  vehicleCreateSchema,
+  vehicleDetailSchema,
+  vehicleListSchema,
+  vehicleRevisionCreateSchema,
+  vehicleRevisionRouteParamsSchema,
+  vehicleRevisionSchema,
+  vehicleRouteParamsSchema,
+  vehicleSavedSchema,
+} from '@photon-ledger/shared';
+import type { RouteDoc } from './route-catalogue';
+
+const m = '/missions/:missionId';
+
+export const inputRoutes: RouteDoc[] = [
+  { method: 'get', path: `${m}/vehicles`, summary: 'Vehicles of the mission with their latest revision', tag: 'vehicles', access: 'read', params: missionParamsSchema, response: { status: 200, schema: vehicleListSchema } },
+  { method: 'post', path: `${m}/vehicles`, summary: 'Create a vehicle (its revision 1)', tag: 'vehicles', access: 'edit', params: missionParamsSchema, body: vehicleCreateSchema, response: { status: 201, schema: vehicleSavedSchema } },
+  { method: 'get', path: `${m}/vehicles/:vehicleId`, summary: 'A vehicle, its revision history and latest spec', tag: 'vehicles', access: 'read', params: vehicleRouteParamsSchema, response: { status: 200, schema: vehicleDetailSchema } },
+  {
+    method: 'post',
+    path: `${m}/vehicles/:vehicleId/revisions`,
+    summary: 'Save a new immutable revision (409 when basedOnRevision is not the latest)',
+    tag: 'vehicles',
+    access: 'edit',
+    params: vehicleRouteParamsSchema,
+    body: vehicleRevisionCreateSchema,
+    response: { status: 201, schema: vehicleSavedSchema },
+  },
+  { method: 'get', path: `${m}/vehicles/:vehicleId/revisions/:revision`, summary: 'One revision with its full spec', tag: 'vehicles', access: 'read', params: vehicleRevisionRouteParamsSchema, response: { status: 200, schema: vehicleRevisionSchema } },
+  {
+    method: 'get',
+    path: `${m}/vehicles/:vehicleId/compare`,
+    summary: 'What changed between two revisions (plates matched by name)',
+    tag: 'vehicles',
+    access: 'read',
+    params: vehicleRouteParamsSchema,
+    query: vehicleCompareQuerySchema,
+    response: { status: 200, schema: vehicleCompareSchema },
+  },
+  {
+    method: 'post',
+    path: `${m}/uploads/plate-set`,
+    summary: 'Upload a plate-set CSV into a new vehicle or a new revision; a bad file is refused with row and column, nothing stored',
+    tag: 'uploads',
+    access: 'edit',
+    params: missionParamsSchema,
+    multipart: plateSetUploadFormSchema,
+    response: { status: 201, schema: plateSetUploadResultSchema },
+  },
+  {
+    method: 'post',
+    path: `${m}/uploads/attitude-profile`,
+    summary: 'Upload an attitude-profile CSV (quaternions over time) for a tabulated attitude law',
+    tag: 'uploads',
+    access: 'edit',
+    params: missionParamsSchema,
+    multipart: z.object({}),
+    response: { status: 201, schema: attitudeProfileUploadResultSchema },
+  },
+  { method: 'get', path: `${m}/uploads`, summary: 'Uploaded files (no content)', tag: 'uploads', access: 'read', params: missionParamsSchema, query: uploadListQuerySchema, response: { status: 200, schema: uploadListSchema } },
+  { method: 'get', path: `${m}/uploads/:uploadId/content`, summary: 'The uploaded bytes as they came', tag: 'uploads', access: 'read', params: uploadRouteParamsSchema, response: { status: 200, contentType: 'text/csv' } },
+  { method: 'get', path: `${m}/scenarios`, summary: 'Scenarios of the mission', tag: 'scenarios', access: 'read', params: missionParamsSchema, response: { status: 200, schema: scenarioListSchema } },
+  { method: 'post', path: `${m}/scenarios`, summary: 'Create a scenario (vehicle given as { ref: vehicle revision id })', tag: 'scenarios', access: 'edit', params: missionParamsSchema, body: scenarioBodySchema, response: { status: 201, schema: scenarioDetailSchema } },
+  { method: 'get', path: `${m}/scenarios/:scenarioId`, summary: 'A scenario with its spec', tag: 'scenarios', access: 'read', params: scenarioRouteParamsSchema, response: { status: 200, schema: scenarioDetailSchema } },
+  { method: 'put', path: `${m}/scenarios/:scenarioId`, summary: 'Replace a scenario (runs keep the snapshot they were made from)', tag: 'scenarios', access: 'edit', params: scenarioRouteParamsSchema, body: scenarioBodySchema, response: { status: 200, schema: scenarioDetailSchema } },
+  { method: 'delete', path: `${m}/scenarios/:scenarioId`, summary: 'Delete a scenario that has no runs', tag: 'scenarios', access: 'edit', params: scenarioRouteParamsSchema, response: { status: 204 } },
+  { method: 'get', path: `${m}/audit`, summary: 'Who changed what and when, newest first', tag: 'audit', access: 'read', params: missionParamsSchema, query: auditQuerySchema, response: { status: 200, schema: auditPageSchema } },
+];
