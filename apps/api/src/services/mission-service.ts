@@ -31,12 +31,15 @@ export async function listMissions(user: User, query: MissionListQuery): Promise
  * so nobody learns which missions exist outside their own.
  */
 export async function getVisibleMission(user: User, missionId: string): Promise<MissionModel> {
-  const row = await MissionModel.findByPk(missionId);
+  // One round trip (every mission-scoped request starts here): the mission, if the user may see it.
+  const rows = await MissionModel.sequelize!.query(
+    `SELECT m.* FROM missions m
+      WHERE m.id = :missionId
+        AND (:seesAll OR EXISTS (SELECT 1 FROM mission_members mm WHERE mm.mission_id = m.id AND mm.user_id = :userId))`,
+    { replacements: { missionId, userId: user.id, seesAll: seesAll(user) }, model: MissionModel, mapToModel: true },
+  );
+  const row = rows[0];
   if (!row) throw notFound('mission');
-  if (!seesAll(user)) {
-    const member = await MissionMemberModel.findOne({ where: { missionId, userId: user.id } });
-    if (!member) throw notFound('mission');
-  }
   return row;
 }
 

@@ -92,18 +92,41 @@ export async function succeededRunFor(
  * no parse and re-serialisation on the way through).
  */
 export async function runSummaryJson(sequelize: Sequelize, user: User, missionId: string, runId: string): Promise<string> {
-  await missionFor(user, missionId, 'read');
+  const now = Date.now();
+  const visibleKey = `${user.id}:${missionId}`;
+  const summaryKey = `${missionId}:${runId}`;
+  const known = summaries.get(summaryKey);
+  if (known !== undefined && (user.role === 'admin' || (visibility.get(visibleKey) ?? 0) > now)) return known;
+  // Reading is open to every role that sees the mission, so visibility (membership, or an admin)
+  // is the whole access rule here, checked in the same query as the read: one round trip.
   const [row] = await sequelize.query<{ status: string; summary: string | null }>(
     `SELECT r.status, rr.summary::text AS summary
        FROM runs r LEFT JOIN run_results rr ON rr.run_id = r.id
-      WHERE r.id = :runId AND r.mission_id = :missionId`,
-    { replacements: { runId, missionId }, type: QueryTypes.SELECT },
+      WHERE r.id = $1 AND r.mission_id = $2
+        AND ($4 OR EXISTS (SELECT 1 FROM mission_members mm WHERE mm.mission_id = r.mission_id AND mm.user_id = $3))`,
+    // Bound parameters: the server does the substitution (replacements are formatted in JS).
+    { bind: [runId, missionId, user.id, user.role === 'admin'], type: QueryTypes.SELECT },
   );
   if (!row) throw notFound('run');
   if (row.status !== 'succeeded') throw notSucceeded(row.status);
   if (row.summary === null) throw new AppError('conflict', 'the run is marked succeeded but its results are not stored yet: try again shortly');
+  if (summaries.size >= SUMMARY_CACHE_MAX) summaries.clear();
+  if (visibility.size >= SUMMARY_CACHE_MAX) visibility.clear();
+  summaries.set(summaryKey, row.summary);
+  visibility.set(visibleKey, now + VISIBILITY_CACHE_MS);
   return row.summary;
 }
+
+/**
+ * The summary page is polled by every open result page, so its reads are kept in memory: a
+ * succeeded run's summary never changes (a retried job rewrites the same numbers), and that a
+ * user sees a mission is re-checked after VISIBILITY_CACHE_MS (as long as a session's user row is
+ * reused, see auth-service.ts), so a removed member loses access within that time.
+ */
+const VISIBILITY_CACHE_MS = 2000;
+const SUMMARY_CACHE_MAX = 2000;
+const summaries = new Map<string, string>();
+const visibility = new Map<string, number>();
 
 /** The located events of a succeeded run, in time order. */
 export async function runEvents(sequelize: Sequelize, user: User, missionId: string, runId: string): Promise<RunEvents> {
