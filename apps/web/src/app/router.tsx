@@ -5,6 +5,13 @@ import { MissionsRoute } from './routes/missions-route';
 import { NotFoundRoute } from './routes/not-found-route';
 import { RouteError } from './routes/route-error';
 import { SignInRoute } from './routes/sign-in-route';
+import { VehicleNewRoute } from './routes/vehicle-new-route';
+import { VehicleRoute } from './routes/vehicle-route';
+import { VehicleHistoryRoute } from './routes/vehicle-history-route';
+import { ScenarioNewRoute } from './routes/scenario-new-route';
+import { ScenarioRoute } from './routes/scenario-route';
+import { RequirementsRoute } from './routes/requirements-route';
+import { RunRoute } from './routes/run-route';
 
 /** The route table; tests mount it in a memory router. */
 export const routes: RouteObject[] = [
@@ -21,6 +28,13 @@ export const routes: RouteObject[] = [
           { index: true, element: <Navigate to="/missions" replace /> },
           { path: 'missions', element: <MissionsRoute /> },
           { path: 'missions/:missionId', element: <MissionRoute /> },
+          { path: 'missions/:missionId/vehicles/new', element: <VehicleNewRoute /> },
+          { path: 'missions/:missionId/vehicles/:vehicleId', element: <VehicleRoute /> },
+          { path: 'missions/:missionId/vehicles/:vehicleId/history', element: <VehicleHistoryRoute /> },
+          { path: 'missions/:missionId/scenarios/new', element: <ScenarioNewRoute /> },
+          { path: 'missions/:missionId/scenarios/:scenarioId', element: <ScenarioRoute /> },
+          { path: 'missions/:missionId/requirements', element: <RequirementsRoute /> },
+          { path: 'missions/:missionId/runs/:runId', element: <RunRoute /> },
           { path: '*', element: <NotFoundRoute /> },
         ],
       },
