@@ -4,7 +4,7 @@ import request from 'supertest';
 import type { Sequelize } from 'sequelize';
 import { inject } from 'vitest';
 import { loadDemoData } from '@photon-ledger/fixtures';
-import type { Role } from '@photon-ledger/shared';
+import { missionListSchema, type Role } from '@photon-ledger/shared';
 import { configSchema, type Config } from '../src/config';
 import { createDatabase } from '../src/db';
 import { createApp } from '../src/app';
@@ -82,4 +82,15 @@ export async function startApi(env: Record<string, string> = {}): Promise<ApiHar
       await sequelize.close();
     },
   };
+}
+
+/** Ids of the two demo missions (read as the admin, who sees every mission). */
+export async function demoMissionIds(api: ApiHarness): Promise<{ corvina: string; halyard: string }> {
+  const { missions } = missionListSchema.parse((await (await api.signedIn('admin')).get('/api/missions')).body);
+  const id = (slug: string) => {
+    const m = missions.find((x) => x.slug === slug);
+    if (!m) throw new Error(`no demo mission ${slug}`);
+    return m.id;
+  };
+  return { corvina: id('corvina-2'), halyard: id('halyard-1') };
 }

@@ -4,7 +4,7 @@
  */
 import { createHash, randomUUID } from 'node:crypto';
 import type request from 'supertest';
-import type { Sequelize } from 'sequelize';
+import type { Sequelize, Transaction } from 'sequelize';
 import { runSchema, scenarioSchema, vehicleSpecSchema, type Run, type Scenario, type VehicleSpec } from '@photon-ledger/shared';
 import corvinaVehicleFile from '@photon-ledger/fixtures/vehicles/corvina-2.vehicle.json' with { type: 'json' };
 import corvinaScenario from '@photon-ledger/fixtures/scenarios/corvina-2-geo-30d.scenario.json' with { type: 'json' };
@@ -38,39 +38,42 @@ export interface ScenarioRows {
 
 /**
  * A vehicle with one revision and a scenario using it, in `missionId`: the corvina-2 scenario with
- * `changes` applied over it (e.g. a shorter span).
+ * `changes` applied over it (e.g. a shorter span), written in `transaction` or a transaction of its own.
+ * The scenario carries no requirements: in the API they belong to the mission.
  */
 export async function createScenarioRows(
   sequelize: Sequelize,
   missionId: string,
   changes: Record<string, unknown>,
   vehicle: VehicleSpec = corvinaVehicle(),
+  transaction?: Transaction,
 ): Promise<ScenarioRows> {
+  if (!transaction) return sequelize.transaction((t) => createScenarioRows(sequelize, missionId, changes, vehicle, t));
   const tag = randomUUID().slice(0, 8);
-  return sequelize.transaction(async (transaction) => {
-    const v = await VehicleModel.create({ missionId, name: `${vehicle.name} ${tag}`, kind: vehicle.kind, latestRevision: 1, createdBy: null }, { transaction });
-    const areas = vehicle.kind === 'plates' ? vehicle.plates.map((p) => p.areaM2) : [vehicle.areaM2];
-    const revision = await VehicleRevisionModel.create(
-      {
-        vehicleId: v.id,
-        revision: 1,
-        spec: vehicle,
-        kind: vehicle.kind,
-        massKg: vehicle.massKg,
-        surfaceCount: areas.length,
-        totalAreaM2: areas.reduce((a, b) => a + b, 0),
-        sourceUploadId: null,
-        createdBy: null,
-      },
-      { transaction },
-    );
-    const scenario = scenarioSchema.parse({ ...corvinaScenarioFile(), ...changes, vehicle: { ref: revision.id } });
-    const row = await ScenarioModel.create(
-      { missionId, name: `${scenario.name} ${tag}`, vehicleRevisionId: revision.id, spec: { ...scenario, name: `${scenario.name} ${tag}` }, createdBy: null },
-      { transaction },
-    );
-    return { scenarioId: row.id, vehicleRevisionId: revision.id, scenario: row.spec, vehicle };
-  });
+  const v = await VehicleModel.create({ missionId, name: `${vehicle.name} ${tag}`, kind: vehicle.kind, latestRevision: 1, createdBy: null }, { transaction });
+  const areas = vehicle.kind === 'plates' ? vehicle.plates.map((p) => p.areaM2) : [vehicle.areaM2];
+  const revision = await VehicleRevisionModel.create(
+    {
+      vehicleId: v.id,
+      revision: 1,
+      spec: vehicle,
+      kind: vehicle.kind,
+      massKg: vehicle.massKg,
+      surfaceCount: areas.length,
+      totalAreaM2: areas.reduce((a, b) => a + b, 0),
+      sourceUploadId: null,
+      createdBy: null,
+    },
+    { transaction },
+  );
+  const parsed = scenarioSchema.parse({ ...corvinaScenarioFile(), requirements: [], ...changes, vehicle: { ref: revision.id } });
+  // A unique name unless the caller chose one.
+  const name = typeof changes.name === 'string' ? parsed.name : `${parsed.name} ${tag}`;
+  const row = await ScenarioModel.create(
+    { missionId, name, vehicleRevisionId: revision.id, spec: { ...parsed, name }, createdBy: null },
+    { transaction },
+  );
+  return { scenarioId: row.id, vehicleRevisionId: revision.id, scenario: row.spec, vehicle };
 }
 
 /** An uploaded attitude profile (CSV text) in `missionId`; returns its id. */

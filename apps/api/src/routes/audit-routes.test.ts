@@ -4,13 +4,12 @@ import {
   apiErrorSchema,
   attitudeProfileUploadResultSchema,
   auditPageSchema,
-  missionListSchema,
   scenarioDetailSchema,
   vehicleSavedSchema,
   type AuditEntry,
   type Role,
 } from '@photon-ledger/shared';
-import { startApi, type ApiHarness } from '../../test/api-harness';
+import { demoMissionIds, startApi, type ApiHarness } from '../../test/api-harness';
 
 const fixtureText = (path: string) => readFileSync(new URL(`../../../../fixtures/${path}`, import.meta.url), 'utf8');
 
@@ -24,10 +23,7 @@ describe('the mission audit log', () => {
 
   beforeAll(async () => {
     api = await startApi();
-    const list = missionListSchema.parse((await (await api.signedIn('admin')).get('/api/missions')).body);
-    const ids = Object.fromEntries(list.missions.map((m) => [m.slug, m.id]));
-    corvina = ids['corvina-2']!;
-    halyard = ids['halyard-1']!;
+    ({ corvina, halyard } = await demoMissionIds(api));
 
     const engineer = await api.signedIn('engineer');
     const lead = await api.signedIn('lead');

@@ -4,14 +4,13 @@ import { QueryTypes } from 'sequelize';
 import {
   apiErrorSchema,
   attitudeProfileUploadResultSchema,
-  missionListSchema,
   plateSetUploadResultSchema,
   scenarioDetailSchema,
   scenarioListSchema,
   vehicleSavedSchema,
   type Role,
 } from '@photon-ledger/shared';
-import { startApi, type ApiHarness } from '../../test/api-harness';
+import { demoMissionIds, startApi, type ApiHarness } from '../../test/api-harness';
 
 const fixtureText = (path: string) => readFileSync(new URL(`../../../../fixtures/${path}`, import.meta.url), 'utf8');
 const fixtureJson = (path: string) => JSON.parse(fixtureText(path)) as Record<string, unknown>;
@@ -42,10 +41,7 @@ describe('scenarios', () => {
 
   beforeAll(async () => {
     api = await startApi();
-    const list = missionListSchema.parse((await (await api.signedIn('admin')).get('/api/missions')).body);
-    const ids = Object.fromEntries(list.missions.map((m) => [m.slug, m.id]));
-    corvina = ids['corvina-2']!;
-    halyard = ids['halyard-1']!;
+    ({ corvina, halyard } = await demoMissionIds(api));
     const engineer = await api.signedIn('engineer');
     const makeVehicle = async (missionId: string, file: string, vehicleName: string) => {
       const res = await engineer.post(`/api/missions/${missionId}/vehicles`).send({ name: vehicleName, spec: fixtureJson(file) });

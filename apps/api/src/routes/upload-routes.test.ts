@@ -5,7 +5,6 @@ import { QueryTypes } from 'sequelize';
 import {
   apiErrorSchema,
   attitudeProfileUploadResultSchema,
-  missionListSchema,
   plateSetUploadResultSchema,
   uploadListSchema,
   uploadSchema,
@@ -15,7 +14,7 @@ import {
   vehicleSpecSchema,
   type Role,
 } from '@photon-ledger/shared';
-import { startApi, type ApiHarness } from '../../test/api-harness';
+import { demoMissionIds, startApi, type ApiHarness } from '../../test/api-harness';
 
 const fixture = (path: string) => readFileSync(new URL(`../../../../fixtures/${path}`, import.meta.url));
 
@@ -52,10 +51,7 @@ describe('uploads: plate sets and attitude profiles', () => {
 
   beforeAll(async () => {
     api = await startApi();
-    const list = missionListSchema.parse((await (await api.signedIn('admin')).get('/api/missions')).body);
-    const ids = Object.fromEntries(list.missions.map((m) => [m.slug, m.id]));
-    corvina = ids['corvina-2']!;
-    halyard = ids['halyard-1']!;
+    ({ corvina, halyard } = await demoMissionIds(api));
     const spec = vehicleSpecSchema.parse(JSON.parse(fixture('vehicles/corvina-2.vehicle.json').toString('utf8')));
     const res = await (await api.signedIn('engineer')).post(`/api/missions/${corvina}/vehicles`).send({ name: 'Corvina-2 (upload test)', spec });
     vehicleId = vehicleSavedSchema.parse(res.body).vehicle.id;

@@ -3,7 +3,6 @@ import { afterAll, beforeAll, describe, expect, it } from 'vitest';
 import { QueryTypes } from 'sequelize';
 import {
   apiErrorSchema,
-  missionListSchema,
   vehicleCompareSchema,
   vehicleDetailSchema,
   vehicleListSchema,
@@ -13,7 +12,7 @@ import {
   type Role,
   type VehicleSpec,
 } from '@photon-ledger/shared';
-import { startApi, type ApiHarness } from '../../test/api-harness';
+import { demoMissionIds, startApi, type ApiHarness } from '../../test/api-harness';
 
 type PlatesSpec = Extract<VehicleSpec, { kind: 'plates' }>;
 
@@ -40,10 +39,7 @@ describe('vehicles and their immutable revisions', () => {
 
   beforeAll(async () => {
     api = await startApi();
-    const list = missionListSchema.parse((await (await api.signedIn('admin')).get('/api/missions')).body);
-    const ids = Object.fromEntries(list.missions.map((m) => [m.slug, m.id]));
-    corvina = ids['corvina-2']!;
-    halyard = ids['halyard-1']!;
+    ({ corvina, halyard } = await demoMissionIds(api));
   });
   afterAll(() => api.close());
 
