@@ -246,7 +246,7 @@ export { srpDeltaV } from './budgets/srp-delta-v';
 export type { SrpDeltaV } from './budgets/srp-delta-v';
 export { secularDrift } from './budgets/secular-drift';
 export type { SecularDrift } from './budgets/secular-drift';
-export { torqueStatistics, momentumBudget } from './budgets/momentum';
+export { torqueStatistics, momentumBudget, timeToLevel as momentumTimeToLevel } from './budgets/momentum';
 export type { TorqueStatistics, MomentumOptions, MomentumBudget, DumpCriterion } from './budgets/momentum';
 export { sailBudget, timeToHeliocentricRadius } from './budgets/sail-budget';
 export type { SailContext, SailBudget } from './budgets/sail-budget';

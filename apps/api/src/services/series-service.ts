@@ -16,6 +16,7 @@ import {
   SAMPLE_SRP_TORQUE_BODY,
   SAMPLE_T,
   SAMPLE_V,
+  momentumTimeToLevel,
   type DumpCriterion,
 } from '@photon-ledger/srp-core';
 import { derivedSeriesColumns, type DerivedSeriesColumn, type Series, type SeriesColumn, type SeriesQuery, type User } from '@photon-ledger/shared';
@@ -108,35 +109,6 @@ interface MomentumSettings {
   criterion: DumpCriterion;
 }
 
-/**
- * Smallest s in [0, ∞) at which H + τ̄ s reaches `level` by the criterion, or Infinity: the same
- * arithmetic as srp-core's momentumBudget (budgets/momentum.ts), so the dumps fall on the same instants.
- */
-function timeToLevel(h: Float64Array, tau: Float64Array, level: number, criterion: DumpCriterion): number {
-  if (criterion === 'axis') {
-    if (Math.max(Math.abs(h[0]!), Math.abs(h[1]!), Math.abs(h[2]!)) >= level) return 0;
-    let best = Infinity;
-    for (let j = 0; j < 3; j += 1) {
-      const rate = tau[j]!;
-      if (rate === 0) continue;
-      const s = ((rate > 0 ? level : -level) - h[j]!) / rate;
-      if (s >= 0 && s < best) best = s;
-    }
-    return best;
-  }
-  const c = h[0]! ** 2 + h[1]! ** 2 + h[2]! ** 2 - level * level;
-  if (c >= 0) return 0;
-  const a = tau[0]! ** 2 + tau[1]! ** 2 + tau[2]! ** 2;
-  if (a === 0) return Infinity;
-  const b = h[0]! * tau[0]! + h[1]! * tau[1]! + h[2]! * tau[2]!;
-  const disc = b * b - a * c;
-  if (disc < 0) return Infinity;
-  const q = -b - Math.sign(b || 1) * Math.sqrt(disc);
-  const r1 = q / a;
-  const r2 = q !== 0 ? c / q : r1;
-  const s = Math.max(r1, r2);
-  return s >= 0 ? s : Infinity;
-}
 
 /** Most dumps followed before the torque is judged too strong for the capacity (as momentumBudget). */
 const MAX_DUMPS = 1e7;
@@ -215,7 +187,8 @@ export async function runSeries(sequelize: Sequelize, user: User, missionId: str
     for (let j = 0; j < 3; j += 1) tau[j] = 0.5 * (previousTorque[j]! + rows[o + SAMPLE_SRP_TORQUE_BODY + j]!);
     if (momentum) {
       for (;;) {
-        const s = timeToLevel(h, tau, momentum.level, momentum.criterion);
+        // The same dump instants as srp-core's momentumBudget: its own step-crossing function.
+        const s = momentumTimeToLevel(h, tau, momentum.level, momentum.criterion);
         if (!(t + s <= tEnd)) break;
         for (let j = 0; j < 3; j += 1) h[j] = h[j]! + tau[j]! * s;
         t += s;

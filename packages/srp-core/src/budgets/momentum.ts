@@ -75,7 +75,7 @@ function requireFraction(value: number): void {
  * Smallest s in (0, remaining] at which H + τ̄ s reaches `level` by the criterion, or Infinity.
  * 'norm': the positive root of |H + τ̄ s|² = level²; 'axis': the first axis to reach ±level.
  */
-function timeToLevel(h: Float64Array, tau: Float64Array, level: number, criterion: DumpCriterion): number {
+export function timeToLevel(h: Float64Array, tau: Float64Array, level: number, criterion: DumpCriterion): number {
   if (criterion === 'axis') {
     // Already at the level (rounding at the end of the previous step): dump now.
     if (Math.max(Math.abs(h[0] as number), Math.abs(h[1] as number), Math.abs(h[2] as number)) >= level) return 0;
