@@ -202,6 +202,8 @@ async function e2eServer(): Promise<void> {
     PL_DATABASE_URL: url.toString(),
     PL_JWT_SECRET: randomBytes(32).toString('base64url'),
     PL_DEMO_MODE: '1',
+    // Browser tests and screenshot tools sign in many times; the limit itself is tested in the API tests.
+    PL_LOGIN_LIMIT: process.env.PL_LOGIN_LIMIT ?? '1000',
     PL_PORT: process.env.PL_PORT ?? '0',
     PL_WEB_DIST: process.env.PL_WEB_DIST ?? webDist,
   });
