@@ -1,4 +1,61 @@
+import { lazy, Suspense } from 'react';
+import { Link, useNavigate, useParams } from 'react-router-dom';
+import { missionParamsSchema } from '@photon-ledger/shared';
+import { Breadcrumbs } from '../../components/ui/breadcrumbs';
+import { buttonClasses } from '../../components/ui/button';
+import { NotFound } from '../../components/ui/not-found';
+import { useMe } from '../../features/auth/api/get-me';
+import { useMission } from '../../features/missions/api/get-mission';
+import { LoadingState } from '../../components/ui/loading-state';
+
+// The editor brings srp-core (for the live preview): loaded with the page, not with the app.
+const NewVehicleEditor = lazy(() =>
+  import('../../features/vehicles/components/vehicle-editor-containers').then((m) => ({ default: m.NewVehicleEditor })),
+);
+
 /** `/missions/:missionId/vehicles/new — a new vehicle (plates, cannonball or sail) with its live 3D preview. */
 export function VehicleNewRoute() {
-  return <p className="text-sm text-ink-soft">This page is being built.</p>;
+  const parsed = missionParamsSchema.safeParse(useParams());
+  if (!parsed.success) {
+    return <NotFound title="Mission not found" message="There is no mission at this address, or you are not a member of it." />;
+  }
+  return <VehicleNewPage key={parsed.data.missionId} missionId={parsed.data.missionId} />;
+}
+
+function VehicleNewPage({ missionId }: { missionId: string }) {
+  const navigate = useNavigate();
+  const me = useMe();
+  const mission = useMission(missionId);
+  const role = me.data?.role;
+  const canEdit = role === 'engineer' || role === 'lead';
+  const missionName = mission.data?.name ?? 'Mission';
+
+  return (
+    <div className="flex flex-col gap-5">
+      <title>{`New vehicle · ${missionName} · Photon Ledger`}</title>
+      <Breadcrumbs
+        items={[
+          { label: 'Missions', to: '/missions' },
+          { label: missionName, to: `/missions/${missionId}` },
+          { label: 'New vehicle' },
+        ]}
+      />
+      <h1 className="text-2xl font-semibold">New vehicle</h1>
+      {role === undefined ? null : canEdit ? (
+        <Suspense fallback={<LoadingState label="Loading the editor…" className="min-h-[28rem] items-start" />}>
+          <NewVehicleEditor
+            missionId={missionId}
+            onCreated={(vehicleId) => void navigate(`/missions/${missionId}/vehicles/${vehicleId}`)}
+          />
+        </Suspense>
+      ) : (
+        <div className="flex max-w-xl flex-col items-start gap-3 rounded-lg border border-rule bg-paper-raised p-4 text-sm">
+          <p>Engineers and leads create vehicles; your role sees them read-only.</p>
+          <Link to={`/missions/${missionId}`} className={buttonClasses('secondary', 'sm')}>
+            Back to the mission
+          </Link>
+        </div>
+      )}
+    </div>
+  );
 }
