@@ -20,6 +20,10 @@ import { runRoutes } from './routes/run-routes';
 import { resultRoutes } from './routes/result-routes';
 import { requirementRoutes } from './routes/requirement-routes';
 import { exportRoutes } from './routes/export-routes';
+import { studyRoutes } from './routes/study-routes';
+import { reviewRoutes } from './routes/review-routes';
+import { commentRoutes } from './routes/comment-routes';
+import { mailRoutes } from './routes/mail-routes';
 import type { RouteContext } from './routes/route-context';
 import type { JobSender } from './jobs/job-sender';
 import { createJobSender } from './jobs/pg-boss-sender';
@@ -52,6 +56,10 @@ export function createApp(config: Config, sequelize: Sequelize, jobs: JobSender 
   api.use(resultRoutes(ctx));
   api.use(requirementRoutes(ctx));
   api.use(exportRoutes(ctx));
+  api.use(studyRoutes(ctx));
+  api.use(reviewRoutes(ctx));
+  api.use(commentRoutes(ctx));
+  api.use(mailRoutes(ctx));
   api.use((req) => {
     throw new AppError('not_found', `no API route ${req.method} /api${req.path}`);
   });

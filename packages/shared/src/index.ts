@@ -95,3 +95,5 @@ export * from './runs';
 export * from './api-vehicles';
 export * from './api-runs';
 export * from './api-results';
+export * from './api-studies';
+export * from './api-reviews';

@@ -22,6 +22,8 @@ import type { MissionAction } from '../services/mission-access';
 import { inputRoutes } from './catalogue-inputs';
 import { runRoutes } from './catalogue-runs';
 import { resultRoutes } from './catalogue-results';
+import { studyRouteDocs } from './catalogue-studies';
+import { reviewRouteDocs } from './catalogue-reviews';
 
 /**
  * Who may call a route: `public` (no sign-in), `signed-in` (any role), `admin`, `admin-or-lead`,
@@ -132,4 +134,4 @@ const coreRoutes: RouteDoc[] = [
 ];
 
 /** Every route, in the order the document lists them. */
-export const routeCatalogue: RouteDoc[] = [...coreRoutes, ...inputRoutes, ...runRoutes, ...resultRoutes];
+export const routeCatalogue: RouteDoc[] = [...coreRoutes, ...inputRoutes, ...runRoutes, ...resultRoutes, ...studyRouteDocs, ...reviewRouteDocs];

@@ -1,0 +1,4 @@
+/** Catalogue entries for reviews, approvals, comments and captured mail. */
+import type { RouteDoc } from './route-catalogue';
+
+export const reviewRouteDocs: RouteDoc[] = [];
