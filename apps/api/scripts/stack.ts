@@ -101,12 +101,14 @@ async function start(): Promise<void> {
 
   const cluster: Cluster = await startCluster({ baseDir: clusterDir(dataDir), port: dbPort });
   let server: ChildProcess | null = null;
+  let mailCapture: { close(): Promise<void> } | null = null;
   const shutdown = onShutdown(async () => {
     console.log('\nstopping Photon Ledger...');
     if (server) {
       server.kill('SIGTERM');
       await waitForExit(server, 10_000);
     }
+    await mailCapture?.close();
     cluster.stop();
     console.log('stopped: API, worker and PostgreSQL');
   });
@@ -128,6 +130,14 @@ async function start(): Promise<void> {
     };
     mustStep('migrate', ...tsNode(path.join(apiDir, 'src/cli/migrate.ts')), env);
     mustStep('demo data', ...tsNode(path.join(apiDir, 'src/cli/seed.ts')), env);
+    // Notifications go to a local capture SMTP server (admins read them on the Mail page) unless
+    // PL_SMTP_URL already names a real relay.
+    if (!process.env.PL_SMTP_URL) {
+      const capture = await startLocalMailCapture(env.PL_DATABASE_URL!);
+      mailCapture = capture;
+      env.PL_SMTP_URL = capture.url;
+      console.log(`mail: capture SMTP server on ${capture.url} (messages listed at /admin/mail)`);
+    }
     mustStep('build web client', pnpm, ['--filter', '@photon-ledger/web', 'build']);
 
     server = spawn(...tsNode(path.join(apiDir, 'src/server.ts')), { cwd: apiDir, env, stdio: ['ignore', 'pipe', 'inherit'] });
@@ -207,17 +217,39 @@ async function e2eServer(): Promise<void> {
     PL_PORT: process.env.PL_PORT ?? '0',
     PL_WEB_DIST: process.env.PL_WEB_DIST ?? webDist,
   });
-  const [{ createDatabase }, { migrateUp }, { seedDemoData }, { loadDemoData }] = await Promise.all([
+  const [{ createDatabase }, { migrateUp }, { seedDemoData }, { seedDemoWorkspace }, { loadDemoData, loadDemoWorkspace }] = await Promise.all([
     import('../src/db'),
     import('../src/migrator'),
     import('../src/services/seed-service'),
+    import('../src/services/demo-workspace-service'),
     import('@photon-ledger/fixtures'),
   ]);
   const sequelize = createDatabase(url.toString());
   await migrateUp(sequelize);
   await seedDemoData(sequelize, loadDemoData());
+  await seedDemoWorkspace(sequelize, loadDemoWorkspace());
   await sequelize.close();
+  if (!process.env.PL_SMTP_URL) {
+    // Stored through the models, which the server's connection (opened on import below) serves.
+    const { startMailCapture, storeCapturedMail } = await import('../src/services/mail-capture');
+    const capture = await startMailCapture({ port: Number(process.env.PL_SMTP_CAPTURE_PORT ?? 0), onMessage: storeCapturedMail });
+    process.env.PL_SMTP_URL = capture.url;
+  }
   await import('../src/server');
+}
+
+/** The start command's capture SMTP server on loopback, storing what it receives in `mail_messages`. */
+async function startLocalMailCapture(databaseUrl: string): Promise<{ url: string; close(): Promise<void> }> {
+  const [{ createDatabase }, { startMailCapture, storeCapturedMail }] = await Promise.all([import('../src/db'), import('../src/services/mail-capture')]);
+  const sequelize = createDatabase(databaseUrl);
+  const capture = await startMailCapture({ port: Number(process.env.PL_SMTP_CAPTURE_PORT ?? 0), onMessage: storeCapturedMail });
+  return {
+    url: capture.url,
+    close: async () => {
+      await capture.close();
+      await sequelize.close();
+    },
+  };
 }
 
 const [command, ...rest] = process.argv.slice(2);
