@@ -54,6 +54,19 @@ describe('apiRequest', () => {
     expect(init?.body).toBe('{"a":1}');
   });
 
+  it('sends a FormData body as multipart, leaving the Content-Type (with its boundary) to the browser', async () => {
+    const fetchMock = vi.fn(async (_input: RequestInfo | URL, _init?: RequestInit) => jsonResponse(201, { user: { id: '6f1c1f4e-6a43-4f38-9c39-3f0b3c3a2b11', email: 'a@b.example', displayName: 'A', role: 'engineer' } }));
+    vi.stubGlobal('fetch', fetchMock);
+    const form = new FormData();
+    form.set('file', new Blob(['a,b\n1,2\n'], { type: 'text/csv' }), 'x.csv');
+
+    await apiRequest('/api/uploads', meResponseSchema, { method: 'POST', body: form });
+
+    const init = fetchMock.mock.calls[0]?.[1];
+    expect(init?.body).toBe(form);
+    expect((init?.headers as Record<string, string>)['Content-Type']).toBeUndefined();
+  });
+
   it('reports a success answer that does not match the schema as unexpected_response, naming the field', async () => {
     vi.stubGlobal('fetch', vi.fn(async () => jsonResponse(200, { user: { id: 'not-a-uuid' } })));
 

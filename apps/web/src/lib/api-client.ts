@@ -38,7 +38,7 @@ export interface ResponseSchema<T> {
 export interface ApiRequestOptions {
   /** HTTP method; GET unless given. */
   method?: 'GET' | 'POST' | 'PUT' | 'PATCH' | 'DELETE';
-  /** Sent as JSON. */
+  /** Sent as JSON, or as multipart/form-data when it is a FormData (uploads). */
   body?: unknown;
   /** Query parameters; undefined and empty values are left out. */
   query?: Record<string, string | undefined>;
@@ -70,13 +70,15 @@ export async function apiRequestNoContent(path: string, options: ApiRequestOptio
 
 async function send(path: string, options: ApiRequestOptions): Promise<Response> {
   const headers: Record<string, string> = { Accept: 'application/json' };
-  if (options.body !== undefined) headers['Content-Type'] = 'application/json';
+  const multipart = options.body instanceof FormData;
+  // For FormData the browser writes the Content-Type with its multipart boundary itself.
+  if (options.body !== undefined && !multipart) headers['Content-Type'] = 'application/json';
   let response: Response;
   try {
     response = await fetch(withQuery(path, options.query), {
       method: options.method ?? 'GET',
       headers,
-      body: options.body === undefined ? null : JSON.stringify(options.body),
+      body: options.body === undefined ? null : multipart ? (options.body as FormData) : JSON.stringify(options.body),
       // The session is an httpOnly cookie.
       credentials: 'include',
       signal: options.signal ?? null,

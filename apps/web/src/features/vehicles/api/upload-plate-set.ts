@@ -1,6 +1,6 @@
 import { useMutation, useQueryClient } from '@tanstack/react-query';
-import { apiErrorSchema, plateSetUploadResultSchema, type PlateSetUploadResult } from '@photon-ledger/shared';
-import { ApiRequestError } from '../../../lib/api-client';
+import { plateSetUploadResultSchema, type PlateSetUploadResult } from '@photon-ledger/shared';
+import { apiRequest } from '../../../lib/api-client';
 import { vehicleQueryOptions } from './get-vehicle';
 import { vehiclesQueryOptions } from './list-vehicles';
 
@@ -29,41 +29,7 @@ export async function uploadPlateSet(missionId: string, file: File, target: Plat
   if (target.note) form.set('note', target.note);
   form.set('file', file, file.name);
 
-  let response: Response;
-  try {
-    // No Content-Type header: the browser writes the multipart boundary itself.
-    response = await fetch(`/api/missions/${encodeURIComponent(missionId)}/uploads/plate-set`, {
-      method: 'POST',
-      body: form,
-      credentials: 'include',
-      headers: { Accept: 'application/json' },
-    });
-  } catch (cause) {
-    throw new ApiRequestError({
-      status: 0,
-      code: 'network_error',
-      message: 'Could not reach the Photon Ledger server. Check your connection and try again.',
-      cause,
-    });
-  }
-  const body: unknown = await response.json().catch(() => undefined);
-  if (!response.ok) {
-    const error = apiErrorSchema.safeParse(body);
-    if (error.success) {
-      const { code, message, fields } = error.data.error;
-      throw new ApiRequestError({ status: response.status, code, message, fields });
-    }
-    throw new ApiRequestError({ status: response.status, code: 'unexpected_response', message: `The server answered ${response.status}.` });
-  }
-  const parsed = plateSetUploadResultSchema.safeParse(body);
-  if (!parsed.success) {
-    throw new ApiRequestError({
-      status: response.status,
-      code: 'unexpected_response',
-      message: 'The server’s answer to the plate-set upload was not understood.',
-    });
-  }
-  return parsed.data;
+  return apiRequest(`/api/missions/${encodeURIComponent(missionId)}/uploads/plate-set`, plateSetUploadResultSchema, { method: 'POST', body: form });
 }
 
 /** Uploads a plate-set CSV; the vehicle (if any) and the mission's list are fetched again afterwards. */
