@@ -3,6 +3,10 @@ import type PgBoss from 'pg-boss';
 import type { Sequelize } from 'sequelize';
 import { PropagationSlot } from './propagation-job';
 import { PROPAGATION_QUEUE } from './queue';
+import { StudyCaseSlot } from './study-case-job';
+import { STUDY_CASE_QUEUE } from '../services/study-service';
+import { MailSlot } from '../services/mail-delivery';
+import { SEND_MAIL_QUEUE } from '../services/mail-service';
 
 /** What a worker gives each of its job slots. */
 export interface JobContext {
@@ -36,4 +40,6 @@ export interface JobDefinition {
 /** Every job type workers take. */
 export const jobDefinitions: JobDefinition[] = [
   { queue: PROPAGATION_QUEUE, createSlot: (context) => new PropagationSlot(context, os.hostname()) },
+  { queue: SEND_MAIL_QUEUE, createSlot: (context) => new MailSlot(context) },
+  { queue: STUDY_CASE_QUEUE, createSlot: (context) => new StudyCaseSlot(context, os.hostname()) },
 ];

@@ -11,6 +11,7 @@ import { fieldErrors, propagationJobSchema, scenarioSchema, vehicleSpecSchema } 
 import { UploadModel, VehicleRevisionModel } from '../models';
 import type { RunOutcome } from '../services/run-outcome';
 import { ComputeThread, type Computation } from './compute-thread';
+import { mailIfLongRun } from '../services/mail-delivery';
 import { claimRun, finishSucceeded, finishWithoutResult, heartbeat, takeBackRuns, type ClaimedRun } from './run-lease';
 import type { RunThreadError, RunThreadInput } from './run-thread-protocol';
 import type { JobContext, JobSlot } from './index';
@@ -209,6 +210,7 @@ export class PropagationSlot implements JobSlot {
       await finishWithoutResult(sequelize, runId, this.workerId, 'failed', `the result could not be stored: ${reason}`);
       return;
     }
+    if (stored) void mailIfLongRun(this.context.boss, runId);
     if (!stored) console.warn(`[worker] run ${runId} was taken from ${this.workerId} before it finished; its result is discarded`);
   }
 

@@ -45,7 +45,8 @@ async function startWorkerProcess(): Promise<WorkerProcess> {
   const slotId = await new Promise<string>((resolve, reject) => {
     const timer = setTimeout(() => reject(new Error(`worker did not start:\n${output}`)), 60_000);
     child.stdout!.on('data', () => {
-      const ready = /worker ready: (\S+) /.exec(output);
+      // The first id is the propagation slot's (other job types' slots follow, comma-separated).
+      const ready = /worker ready: ([^\s,]+)[, ]/.exec(output);
       if (ready) {
         clearTimeout(timer);
         resolve(ready[1]!);

@@ -11,6 +11,11 @@ import { RunResultModel } from './run-result';
 import { RunSampleChunkModel } from './run-sample-chunk';
 import { RequirementModel } from './requirement';
 import { AuditEntryModel } from './audit-entry';
+import { ReviewModel } from './review';
+import { CommentModel } from './comment';
+import { MailMessageModel } from './mail-message';
+import { TradeStudyModel } from './trade-study';
+import { StudyCaseModel } from './study-case';
 
 /** Registers every model and association on a connection. */
 export function initModels(sequelize: Sequelize): void {
@@ -33,6 +38,11 @@ export function initModels(sequelize: Sequelize): void {
   ScenarioModel.belongsTo(VehicleRevisionModel, { foreignKey: 'vehicleRevisionId', as: 'vehicleRevision' });
   RunModel.belongsTo(ScenarioModel, { foreignKey: 'scenarioId', as: 'scenario' });
   RunModel.hasOne(RunResultModel, { foreignKey: 'runId', as: 'result' });
+  TradeStudyModel.initModel(sequelize);
+  StudyCaseModel.initModel(sequelize);
+  ReviewModel.initModel(sequelize);
+  CommentModel.initModel(sequelize);
+  MailMessageModel.initModel(sequelize);
 }
 
 export { UserModel, toUser } from './user';
@@ -47,3 +57,8 @@ export { RunResultModel } from './run-result';
 export { RunSampleChunkModel } from './run-sample-chunk';
 export { RequirementModel } from './requirement';
 export { AuditEntryModel, audit, type AuditRecord } from './audit-entry';
+export { TradeStudyModel } from './trade-study';
+export { StudyCaseModel } from './study-case';
+export { ReviewModel } from './review';
+export { CommentModel } from './comment';
+export { MailMessageModel } from './mail-message';

@@ -116,9 +116,42 @@ describe('permissions: every route × every role', () => {
     return res.body.id as string;
   }
 
+  /** The body of a one-case study of the permissions scenario. */
+  function studyBody(): object {
+    return { name: `Permissions study ${randomUUID().slice(0, 8)}`, scenarioId, design: { kind: 'grid', parameters: [{ path: 'vehicle.massKg', values: [1500] }] }, lines: ['srp.accel.max', 'torque.max'] };
+  }
+
+  /** A new study with its case queued (for a cancel). */
+  async function newStudy(): Promise<string> {
+    const res = await agents.engineer.post(`/api/missions/${corvina}/studies`).send(studyBody());
+    expect(res.status, JSON.stringify(res.body)).toBe(201);
+    return res.body.id as string;
+  }
+
+  let sharedStudyId: string | null = null;
+  /** One study for the read routes, made on first use. */
+  async function sharedStudy(): Promise<string> {
+    sharedStudyId ??= await newStudy();
+    return sharedStudyId;
+  }
+
   /** A queued run (no worker runs in this test, so it stays queued). */
   async function queuedRun(): Promise<string> {
     const res = await agents.engineer.post(`/api/missions/${corvina}/runs`).send({ scenarioId });
+    expect(res.status).toBe(201);
+    return res.body.id as string;
+  }
+
+  /** A fresh succeeded run of corvina-2; submitted for review by the engineer when `inReview`. */
+  async function reviewableRun(inReview: boolean): Promise<string> {
+    const { runId } = await storeRun(api.sequelize, { missionId: corvina, spanDays: 0.05, outputStepS: 900 });
+    if (inReview) expect((await agents.engineer.post(`/api/missions/${corvina}/reviews/budget/${runId}/submit`).send({})).status).toBe(200);
+    return runId;
+  }
+
+  /** A comment on the done run's budget written by `role`. */
+  async function commentBy(role: 'engineer' | 'lead' | 'reviewer'): Promise<string> {
+    const res = await agents[role].post(`/api/missions/${corvina}/comments`).send({ subjectType: 'budget', subjectId: doneRunId, body: `by ${role}` });
     expect(res.status).toBe(201);
     return res.body.id as string;
   }
@@ -201,6 +234,34 @@ describe('permissions: every route × every role', () => {
     'get /missions/:missionId/runs/:runId/export/ephemeris.csv': async (who) => ({ url: `/missions/${mission(who)}/runs/${doneRunId}/export/ephemeris.csv` }),
     'get /missions/:missionId/runs/:runId/export/ephemeris.oem': async (who) => ({ url: `/missions/${mission(who)}/runs/${doneRunId}/export/ephemeris.oem` }),
     'get /missions/:missionId/runs/:runId/export/budget.csv': async (who) => ({ url: `/missions/${mission(who)}/runs/${doneRunId}/export/budget.csv` }),
+    // Reviews: each call gets a fresh run in the state its transition starts from.
+    'get /missions/:missionId/reviews': async (who) => ({ url: `/missions/${mission(who)}/reviews` }),
+    'get /missions/:missionId/reviews/:subjectType/:subjectId': async (who) => ({ url: `/missions/${mission(who)}/reviews/budget/${doneRunId}` }),
+    'post /missions/:missionId/reviews/:subjectType/:subjectId/submit': async (who) => ({ url: `/missions/${mission(who)}/reviews/budget/${await reviewableRun(false)}/submit`, body: {} }),
+    'post /missions/:missionId/reviews/:subjectType/:subjectId/approve': async (who) => ({ url: `/missions/${mission(who)}/reviews/budget/${await reviewableRun(true)}/approve`, body: {} }),
+    'post /missions/:missionId/reviews/:subjectType/:subjectId/send-back': async (who) => ({
+      url: `/missions/${mission(who)}/reviews/budget/${await reviewableRun(true)}/send-back`,
+      body: { reason: 'permissions test' },
+    }),
+    'get /missions/:missionId/comments': async (who) => ({ url: `/missions/${mission(who)}/comments?subjectType=budget&subjectId=${doneRunId}` }),
+    'post /missions/:missionId/comments': async (who) => ({ url: `/missions/${mission(who)}/comments`, body: { subjectType: 'budget', subjectId: doneRunId, body: `remark by ${who}` } }),
+    // Only the author edits: those who may comment edit their own comment.
+    'put /missions/:missionId/comments/:commentId': async (who) => ({
+      url: `/missions/${mission(who)}/comments/${await commentBy(who === 'lead' || who === 'reviewer' ? who : 'engineer')}`,
+      body: { body: 'edited' },
+    }),
+    'post /missions/:missionId/comments/:commentId/resolve': async (who) => ({ url: `/missions/${mission(who)}/comments/${await commentBy('engineer')}/resolve`, body: { resolved: true } }),
+    'get /admin/mail': async () => ({ url: '/admin/mail' }),
+    // Trade studies: a one-case grid over the permissions scenario (no worker runs here, so cases stay queued).
+    'post /missions/:missionId/studies': async (who) => ({ url: `/missions/${mission(who)}/studies`, body: studyBody() }),
+    'get /missions/:missionId/studies': async (who) => ({ url: `/missions/${mission(who)}/studies` }),
+    'get /missions/:missionId/studies/:studyId': async (who) => ({ url: `/missions/${mission(who)}/studies/${await sharedStudy()}` }),
+    'post /missions/:missionId/studies/:studyId/cancel': async (who) => ({ url: `/missions/${mission(who)}/studies/${await newStudy()}/cancel` }),
+    'get /missions/:missionId/studies/:studyId/cases': async (who) => ({ url: `/missions/${mission(who)}/studies/${await sharedStudy()}/cases?sort=line:srp.accel.max&dir=desc` }),
+    'get /missions/:missionId/studies/:studyId/statistics': async (who) => ({ url: `/missions/${mission(who)}/studies/${await sharedStudy()}/statistics` }),
+    'get /missions/:missionId/studies/:studyId/pareto': async (who) => ({ url: `/missions/${mission(who)}/studies/${await sharedStudy()}/pareto?x=srp.accel.max&y=torque.max` }),
+    'get /missions/:missionId/studies/:studyId/best': async (who) => ({ url: `/missions/${mission(who)}/studies/${await sharedStudy()}/best?line=srp.accel.max` }),
+    'get /missions/:missionId/studies/:studyId/export/cases.csv': async (who) => ({ url: `/missions/${mission(who)}/studies/${await sharedStudy()}/export/cases.csv` }),
   };
 
   it('has a valid request for every catalogued route', () => {

@@ -50,6 +50,21 @@ export function AppShell({ user, onSignOut, signingOut, signOutError, children }
                   Missions
                 </NavLink>
               </li>
+              {user.role === 'admin' && (
+                <li>
+                  <NavLink
+                    to="/admin/mail"
+                    className={({ isActive }) =>
+                      cx(
+                        'rounded-md px-2.5 py-1.5 font-medium',
+                        isActive ? 'bg-ink-wash text-ink' : 'text-ink-soft hover:bg-paper-sunk hover:text-ink',
+                      )
+                    }
+                  >
+                    Mail
+                  </NavLink>
+                </li>
+              )}
             </ul>
           </nav>
           <div className="ml-auto flex items-center gap-3">

@@ -12,6 +12,10 @@ import { ScenarioNewRoute } from './routes/scenario-new-route';
 import { ScenarioRoute } from './routes/scenario-route';
 import { RequirementsRoute } from './routes/requirements-route';
 import { RunRoute } from './routes/run-route';
+import { MailRoute } from './routes/mail-route';
+import { ReviewReportRoute } from './routes/review-report-route';
+import { StudyNewRoute } from './routes/study-new-route';
+import { StudyRoute } from './routes/study-route';
 
 /** The route table; tests mount it in a memory router. */
 export const routes: RouteObject[] = [
@@ -35,6 +39,10 @@ export const routes: RouteObject[] = [
           { path: 'missions/:missionId/scenarios/:scenarioId', element: <ScenarioRoute /> },
           { path: 'missions/:missionId/requirements', element: <RequirementsRoute /> },
           { path: 'missions/:missionId/runs/:runId', element: <RunRoute /> },
+          { path: 'missions/:missionId/runs/:runId/report', element: <ReviewReportRoute /> },
+          { path: 'missions/:missionId/studies/new', element: <StudyNewRoute /> },
+          { path: 'missions/:missionId/studies/:studyId', element: <StudyRoute /> },
+          { path: 'admin/mail', element: <MailRoute /> },
           { path: '*', element: <NotFoundRoute /> },
         ],
       },

@@ -17,6 +17,8 @@ import { useRunBudget } from '../../features/runs/api/get-run-budget';
 import { useRuns } from '../../features/runs/api/list-runs';
 import { runPagePath } from '../../features/runs/api/run-path';
 import { RunList } from '../../features/runs/components/run-list';
+import { useStudies } from '../../features/studies/api/list-studies';
+import { StudyList } from '../../features/studies/components/study-list';
 import { useScenarios } from '../../features/scenarios/api/list-scenarios';
 import { ScenarioList } from '../../features/scenarios/components/scenario-list';
 import { useVehicles } from '../../features/vehicles/api/list-vehicles';
@@ -82,6 +84,7 @@ function MissionPage({ missionId }: { missionId: string }) {
       <VehiclesSection missionId={missionId} canEdit={canEdit} />
       <ScenariosSection missionId={missionId} canEdit={canEdit} />
       <RunsSection missionId={missionId} />
+      <StudiesSection missionId={missionId} canEdit={canEdit} />
       <Section id="members-heading" title="Members" count={data.members.length}>
         <MemberList members={data.members} />
       </Section>
@@ -192,6 +195,32 @@ function MissionBudget({ missionId }: { missionId: string }) {
       requirementCount={requirements.data?.requirements.length}
       requirementsTo={`/missions/${missionId}/requirements`}
     />
+  );
+}
+
+function StudiesSection({ missionId, canEdit }: { missionId: string; canEdit: boolean }) {
+  const studies = useStudies(missionId);
+  return (
+    <Section
+      id="studies-heading"
+      title="Trade studies"
+      count={studies.data?.studies.length}
+      action={
+        canEdit && (
+          <Link to={`/missions/${missionId}/studies/new`} className={buttonClasses('secondary', 'sm')}>
+            New study
+          </Link>
+        )
+      }
+    >
+      {studies.isPending ? (
+        <TableSkeleton label="Loading trade studies…" rows={2} />
+      ) : studies.isError ? (
+        <ErrorState title="Could not load the trade studies" error={studies.error} onRetry={() => void studies.refetch()} retrying={studies.isFetching} />
+      ) : (
+        <StudyList missionId={missionId} studies={studies.data.studies} />
+      )}
+    </Section>
   );
 }
 

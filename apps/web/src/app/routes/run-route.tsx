@@ -1,6 +1,6 @@
 import { lazy, Suspense, useMemo, type ReactNode } from 'react';
 import { Link, useParams } from 'react-router-dom';
-import { runParamsSchema, type Run, type RunSummary } from '@photon-ledger/shared';
+import { runParamsSchema, type Role, type Run, type RunSummary } from '@photon-ledger/shared';
 import { Breadcrumbs } from '../../components/ui/breadcrumbs';
 import { cautionText } from '../../components/ui/caution-footer';
 import { ErrorState } from '../../components/ui/error-state';
@@ -27,6 +27,8 @@ import { RunSummaryFacts, RunSummaryFactsSkeleton } from '../../features/runs/co
 import { pairEclipses } from '../../features/runs/lib/eclipses';
 import { formatDuration, formatUtc, secondsBetween } from '../../features/runs/lib/format-time';
 import { ApiRequestError } from '../../lib/api-client';
+import { ReviewPanel } from '../../features/reviews/components/review-panel';
+import { CommentThread } from '../../features/comments/components/comment-thread';
 
 // uPlot and three.js stay out of the first bundle.
 const RunCharts = lazy(() => import('../../features/runs/components/charts/run-charts'));
@@ -107,8 +109,38 @@ function RunPage({ missionId, runId }: { missionId: string; runId: string }) {
           </p>
         </div>
       )}
+      {data.status === 'succeeded' && <RunReview missionId={missionId} runId={runId} role={role} />}
       {data.status === 'succeeded' && <RunResults missionId={missionId} runId={runId} />}
+      {data.status === 'succeeded' && <RunComments missionId={missionId} runId={runId} role={role} />}
     </div>
+  );
+}
+
+/** Review of the run's budget (submit, approve, send back) with a link to its printable report. */
+function RunReview({ missionId, runId, role }: { missionId: string; runId: string; role: Role | undefined }) {
+  return (
+    <Section
+      id="review"
+      title="Review"
+      aside={
+        <Link to={`${runPagePath(missionId, runId)}/report`} className="text-sm underline decoration-rule-strong underline-offset-2 hover:text-sodium-deep">
+          Printable review report
+        </Link>
+      }
+    >
+      <ReviewPanel missionId={missionId} subjectType="budget" subjectId={runId} role={role} />
+    </Section>
+  );
+}
+
+/** Comments on the budget as a whole or on one of its lines. */
+function RunComments({ missionId, runId, role }: { missionId: string; runId: string; role: Role | undefined }) {
+  const budget = useRunBudget(missionId, runId);
+  const lines = (budget.data?.lines ?? []).map((l) => ({ key: l.key, label: l.label }));
+  return (
+    <Section id="comments" title="Comments on the budget">
+      <CommentThread missionId={missionId} subjectType="budget" subjectId={runId} canComment={role === 'engineer' || role === 'lead' || role === 'reviewer'} lines={lines} />
+    </Section>
   );
 }
 

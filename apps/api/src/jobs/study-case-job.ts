@@ -1,0 +1,230 @@
+/**
+ * The `study-case` job: compute one case of a trade study. Same pattern as a run (propagation-job.ts):
+ * the slot claims the case row with a guarded UPDATE, computes in its own thread (compute-thread.ts)
+ * with a heartbeat every second that also reads the study's cancel flag, and stores the budget line
+ * values only if it still holds the case. A case whose worker died (no heartbeat for the stale
+ * period) is claimed again by the job's pg-boss retry after expiry.
+ */
+import type PgBoss from 'pg-boss';
+import { QueryTypes, type Sequelize } from 'sequelize';
+import { fieldErrors, scenarioSchema, studyCaseJobSchema, vehicleSpecSchema, type Scenario, type VehicleSpec } from '@photon-ledger/shared';
+import { caseSpecs } from '../services/study-design';
+import { STUDY_CASE_QUEUE } from '../services/study-service';
+import { ComputeThread, type Computation } from './compute-thread';
+import { failureMessage, heartbeatIntervalMs } from './propagation-job';
+import { sendJob } from './queue';
+import type { JobContext, JobSlot } from './index';
+
+interface ClaimedCase {
+  id: string;
+  parameters: Record<string, number>;
+  baseScenario: unknown;
+  baseVehicle: unknown;
+  vehicleRevisionId: string;
+}
+
+/** Takes a queued case (or a running one whose holder went silent) of a study not cancelled. */
+export async function claimCase(sequelize: Sequelize, caseId: string, workerId: string, staleSeconds: number): Promise<ClaimedCase | null> {
+  const [row] = await sequelize.query<{ id: string; parameters: Record<string, number>; base_scenario: unknown; base_vehicle: unknown; vehicle_revision_id: string }>(
+    `UPDATE study_cases c
+        SET status = 'running', worker_id = :workerId, attempts = c.attempts + 1, error_message = NULL,
+            started_at = now(), heartbeat_at = now(), updated_at = now()
+       FROM trade_studies s
+      WHERE c.id = :caseId AND s.id = c.study_id AND NOT s.cancel_requested
+        AND (c.status = 'queued' OR (c.status = 'running' AND c.heartbeat_at < now() - make_interval(secs => :staleSeconds)))
+      RETURNING c.id, c.parameters, s.base_scenario, s.base_vehicle, s.vehicle_revision_id`,
+    { replacements: { caseId, workerId, staleSeconds }, type: QueryTypes.SELECT },
+  );
+  if (!row) return null;
+  return { id: row.id, parameters: row.parameters, baseScenario: row.base_scenario, baseVehicle: row.base_vehicle, vehicleRevisionId: row.vehicle_revision_id };
+}
+
+/** Proves the worker alive; false when the case is no longer held, `cancel` when the study was cancelled. */
+async function caseHeartbeat(sequelize: Sequelize, caseId: string, workerId: string): Promise<{ held: boolean; cancel: boolean }> {
+  const [row] = await sequelize.query<{ cancel: boolean }>(
+    `UPDATE study_cases c SET heartbeat_at = now(), updated_at = now()
+       FROM trade_studies s
+      WHERE c.id = :caseId AND c.worker_id = :workerId AND c.status = 'running' AND s.id = c.study_id
+      RETURNING s.cancel_requested AS cancel`,
+    { replacements: { caseId, workerId }, type: QueryTypes.SELECT },
+  );
+  return row ? { held: true, cancel: row.cancel } : { held: false, cancel: false };
+}
+
+/** Ends a held case; false when it was no longer this worker's. */
+export async function finishCase(
+  sequelize: Sequelize,
+  caseId: string,
+  workerId: string,
+  status: 'succeeded' | 'failed' | 'cancelled',
+  lines: Record<string, number | null> | null,
+  errorMessage: string | null,
+): Promise<boolean> {
+  const [row] = await sequelize.query<{ id: string }>(
+    `UPDATE study_cases SET status = :status, lines = CAST(:lines AS jsonb), error_message = :errorMessage,
+            finished_at = now(), heartbeat_at = now(), updated_at = now()
+      WHERE id = :caseId AND worker_id = :workerId AND status = 'running'
+      RETURNING id`,
+    { replacements: { caseId, workerId, status, lines: lines === null ? null : JSON.stringify(lines), errorMessage }, type: QueryTypes.SELECT },
+  );
+  return Boolean(row);
+}
+
+function firstIssue(prefix: string, error: import('zod').ZodError): string {
+  const [field, message] = Object.entries(fieldErrors(error))[0] ?? ['(root)', 'invalid'];
+  return `${prefix}.${field}: ${message}`;
+}
+
+let slotsInProcess = 0;
+
+/** How long a slot keeps fetching cases itself before it returns to pg-boss's work loop (ms). */
+const DRAIN_MS = 30_000;
+
+/** One unit of a worker's concurrency on the study-case queue, with its own computation thread. */
+export class StudyCaseSlot implements JobSlot {
+  readonly workerId: string;
+  private readonly thread = new ComputeThread();
+  private computation: Computation | null = null;
+  private idle: Promise<void> = Promise.resolve();
+  private releasing = false;
+
+  constructor(
+    private readonly context: JobContext,
+    hostName: string,
+  ) {
+    this.workerId = `${hostName}:${process.pid}:study-${slotsInProcess++}`;
+  }
+
+  /**
+   * pg-boss handler. A study's cases are short and many, and the work loop waits its polling
+   * interval between batches, so after the job handed in the slot fetches further cases itself
+   * (completing or failing each) for up to DRAIN_MS before it returns to the loop.
+   */
+  readonly handle = async (jobs: PgBoss.Job<unknown>[]): Promise<void> => {
+    let ended!: () => void;
+    this.idle = new Promise((resolve) => (ended = resolve));
+    try {
+      for (const job of jobs) await this.runJob(job);
+      const { boss } = this.context;
+      const until = Date.now() + DRAIN_MS;
+      while (!this.releasing && Date.now() < until) {
+        const [next] = await boss.fetch<unknown>(STUDY_CASE_QUEUE, { batchSize: 1 });
+        if (!next) break;
+        try {
+          await this.runJob(next);
+        } catch (err) {
+          await boss.fail(STUDY_CASE_QUEUE, next.id, { message: err instanceof Error ? err.message : String(err) });
+          continue;
+        }
+        await boss.complete(STUDY_CASE_QUEUE, next.id);
+      }
+    } finally {
+      this.computation = null;
+      ended();
+    }
+  };
+
+  private async runJob(job: PgBoss.Job<unknown>): Promise<void> {
+    const payload = studyCaseJobSchema.safeParse(job.data);
+    if (!payload.success) {
+      console.error(`[worker] job ${job.id} on ${job.name} ignored: bad payload`);
+      return;
+    }
+    try {
+      await this.runCase(payload.data.caseId);
+    } finally {
+      this.computation = null;
+    }
+  }
+
+  whenIdle(): Promise<void> {
+    return this.idle;
+  }
+
+  async release(): Promise<void> {
+    this.releasing = true;
+    await this.computation?.abort();
+    await this.idle;
+  }
+
+  close(): Promise<void> {
+    return this.thread.close();
+  }
+
+  private async runCase(caseId: string): Promise<void> {
+    const { sequelize, staleSeconds } = this.context;
+    const claimed = await claimCase(sequelize, caseId, this.workerId, staleSeconds);
+    if (!claimed) return;
+    if (this.releasing) return this.giveBack(caseId);
+
+    const vehicleBase = vehicleSpecSchema.safeParse(claimed.baseVehicle);
+    const scenarioBase = scenarioSchema.safeParse(claimed.baseScenario);
+    if (!vehicleBase.success || !scenarioBase.success) {
+      const message = !vehicleBase.success ? firstIssue('vehicle', vehicleBase.error) : firstIssue('scenario', scenarioBase.error!);
+      await finishCase(sequelize, caseId, this.workerId, 'failed', null, message);
+      return;
+    }
+    const specs = caseSpecs({ vehicle: vehicleBase.data, scenario: scenarioBase.data }, claimed.parameters);
+    const vehicle = vehicleSpecSchema.safeParse(specs.vehicle);
+    const scenario = scenarioSchema.safeParse(specs.scenario);
+    if (!vehicle.success || !scenario.success) {
+      const message = !vehicle.success ? firstIssue('vehicle', vehicle.error) : firstIssue('scenario', scenario.error!);
+      await finishCase(sequelize, caseId, this.workerId, 'failed', null, message);
+      return;
+    }
+
+    const computation = this.thread.compute(
+      { scenario: scenario.data as Scenario, vehicle: vehicle.data as VehicleSpec, vehicleRevisionId: claimed.vehicleRevisionId },
+      () => {},
+    );
+    this.computation = computation;
+    let beat: Promise<void> | null = null;
+    const timer = setInterval(() => {
+      if (beat) return;
+      beat = caseHeartbeat(sequelize, caseId, this.workerId)
+        .then(async (answer) => {
+          if (!answer.held) await computation.abort();
+          else if (answer.cancel) computation.requestCancel();
+        })
+        .catch((err: unknown) => console.error(`[worker] heartbeat of study case ${caseId} failed:`, err))
+        .finally(() => {
+          beat = null;
+        });
+    }, heartbeatIntervalMs(staleSeconds));
+    let result;
+    try {
+      result = await computation.done;
+    } finally {
+      clearInterval(timer);
+      await beat;
+    }
+    switch (result.kind) {
+      case 'succeeded': {
+        const lines = Object.fromEntries(result.outcome.budget.lines.map((line) => [line.key, line.value]));
+        await finishCase(sequelize, caseId, this.workerId, 'succeeded', lines, null);
+        return;
+      }
+      case 'cancelled':
+        await finishCase(sequelize, caseId, this.workerId, 'cancelled', null, null);
+        return;
+      case 'failed':
+        await finishCase(sequelize, caseId, this.workerId, 'failed', null, failureMessage(result.error));
+        return;
+      case 'aborted':
+        if (this.releasing) await this.giveBack(caseId);
+    }
+  }
+
+  /** The worker is stopping: the case goes back to queued with a new job, in one transaction. */
+  private async giveBack(caseId: string): Promise<void> {
+    const { sequelize, boss } = this.context;
+    await sequelize.transaction(async (transaction) => {
+      const [row] = await sequelize.query<{ id: string }>(
+        `UPDATE study_cases SET status = 'queued', worker_id = NULL, heartbeat_at = NULL, updated_at = now()
+          WHERE id = :caseId AND worker_id = :workerId AND status = 'running' RETURNING id`,
+        { replacements: { caseId, workerId: this.workerId }, type: QueryTypes.SELECT, transaction },
+      );
+      if (row) await sendJob(boss, STUDY_CASE_QUEUE, { caseId }, { inTransaction: { sequelize, transaction } });
+    });
+  }
+}
