@@ -45,8 +45,9 @@ export interface Worker {
 export async function startWorker(options: WorkerOptions): Promise<Worker> {
   const { databaseUrl, concurrency, staleSeconds, pollSeconds } = options;
   const sequelize = options.sequelize ?? createDatabase(databaseUrl);
-  // One connection per loop for fetching, plus the reaper's and pg-boss's own maintenance.
-  const boss: PgBoss = await openQueue(databaseUrl, { maxConnections: concurrency + 2, pollSeconds });
+  // One connection per fetch loop (each job type has `concurrency` of them), plus the reaper's and
+  // pg-boss's own maintenance: too few and the loops queue for connections behind each other.
+  const boss: PgBoss = await openQueue(databaseUrl, { maxConnections: jobDefinitions.length * concurrency + 2, pollSeconds });
   const context: JobContext = { sequelize, boss, staleSeconds };
   const slots: JobSlot[] = [];
   const loopIds: string[] = [];
