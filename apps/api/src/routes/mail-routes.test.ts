@@ -3,7 +3,9 @@
  * at it, and the messages that reach it (recipients, subject, text); the administrators' list of
  * captured mail; the long-run notice.
  */
-import { afterAll, beforeAll, describe, expect, it } from 'vitest';
+import { afterAll, beforeAll, describe, expect, inject, it } from 'vitest';
+import { openQueue } from '../jobs/queue';
+import { SEND_MAIL_QUEUE } from '../services/mail-service';
 import type request from 'supertest';
 import { mailListSchema, type Role } from '@photon-ledger/shared';
 import { startApi, demoMissionIds, type ApiHarness } from '../../test/api-harness';
@@ -34,6 +36,12 @@ describe('e-mail notifications through a capture SMTP server', () => {
     for (const key of ['PL_SMTP_URL', 'PL_MAIL_LONG_RUN_SECONDS']) saved[key] = process.env[key];
     process.env.PL_SMTP_URL = capture.url;
     process.env.PL_MAIL_LONG_RUN_SECONDS = '0';
+    // Earlier test files share this database and queue mail too (with no relay to take it): drop
+    // that backlog, or this file's worker spends its time delivering other files' messages first.
+    const boss = await openQueue(inject('databaseUrl'), { maxConnections: 1, maintenance: false });
+    await boss.createQueue(SEND_MAIL_QUEUE);
+    await boss.purgeQueue(SEND_MAIL_QUEUE);
+    await boss.stop({ graceful: false, wait: true });
     api = await startApi({ PL_SMTP_URL: capture.url, PL_WORKERS_IN_PROCESS: '1', PL_WORKER_POLL_SECONDS: '0.5' });
     for (const role of ['admin', 'engineer', 'lead', 'reviewer'] as const) agents[role] = await api.signedIn(role);
     ({ corvina } = await demoMissionIds(api));
