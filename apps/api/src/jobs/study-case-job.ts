@@ -9,6 +9,7 @@ import type PgBoss from 'pg-boss';
 import { QueryTypes, type Sequelize } from 'sequelize';
 import { fieldErrors, scenarioSchema, studyCaseJobSchema, vehicleSpecSchema, type Scenario, type VehicleSpec } from '@photon-ledger/shared';
 import { caseSpecs } from '../services/study-design';
+import { noteStudyFinishedIfLast } from '../services/mail-delivery';
 import { STUDY_CASE_QUEUE } from '../services/study-service';
 import { ComputeThread, type Computation } from './compute-thread';
 import { failureMessage, heartbeatIntervalMs } from './propagation-job';
@@ -201,14 +202,16 @@ export class StudyCaseSlot implements JobSlot {
     switch (result.kind) {
       case 'succeeded': {
         const lines = Object.fromEntries(result.outcome.budget.lines.map((line) => [line.key, line.value]));
-        await finishCase(sequelize, caseId, this.workerId, 'succeeded', lines, null);
+        if (await finishCase(sequelize, caseId, this.workerId, 'succeeded', lines, null)) await noteStudyFinishedIfLast(this.context.boss, sequelize, caseId);
         return;
       }
       case 'cancelled':
         await finishCase(sequelize, caseId, this.workerId, 'cancelled', null, null);
         return;
       case 'failed':
-        await finishCase(sequelize, caseId, this.workerId, 'failed', null, failureMessage(result.error));
+        if (await finishCase(sequelize, caseId, this.workerId, 'failed', null, failureMessage(result.error))) {
+          await noteStudyFinishedIfLast(this.context.boss, sequelize, caseId);
+        }
         return;
       case 'aborted':
         if (this.releasing) await this.giveBack(caseId);

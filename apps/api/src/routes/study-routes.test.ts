@@ -99,6 +99,9 @@ describe('trade studies', () => {
       expect(c.lines!['sail.loading']).toBeCloseTo(m / a, 12);
     }
     expect(new Set(cases.map((c) => `${c.parameters['vehicle.areaM2']}/${c.parameters['vehicle.massKg']}`)).size).toBe(6);
+    // The worker that ended the last case records the study's end once (the creator's mail hangs on it).
+    const audit = auditPageSchema.parse((await engineer.get(`/api/missions/${missionId}/audit?limit=200`)).body);
+    expect(audit.entries.filter((e) => e.entityId === study.id && e.action === 'study-finished')).toHaveLength(1);
   }, 300_000);
 
   it('sorts, filters, finds the best and the Pareto cases, and exports the table as CSV', async () => {
@@ -192,6 +195,7 @@ describe('trade studies', () => {
     const mine = audit.entries.filter((e) => e.entityId === study.id).map((e) => e.action);
     expect(mine).toContain('study-created');
     expect(mine).toContain('study-cancelled');
+    expect(mine).not.toContain('study-finished');
   }, 120_000);
 
   it('refuses bad definitions naming the parameter, the case and the field', async () => {

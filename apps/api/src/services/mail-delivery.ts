@@ -9,8 +9,9 @@ import { fieldErrors, sendMailJobSchema, type SendMailJob } from '@photon-ledger
 import { loadConfig, mailConfigSchema, type MailConfig } from '../config';
 import type { JobContext, JobSlot } from '../jobs';
 import { sendJob } from '../jobs/queue';
-import { RunModel } from '../models';
-import { notifyRunFinished } from './mail-service';
+import { QueryTypes, type Sequelize } from 'sequelize';
+import { AuditEntryModel, RunModel, TradeStudyModel, audit } from '../models';
+import { notifyRunFinished, notifyStudyFinished } from './mail-service';
 
 /** Sends one message through the relay; throws when the relay refuses or cannot be reached. */
 export async function deliverMail(config: Pick<MailConfig, 'PL_SMTP_URL' | 'PL_MAIL_FROM'>, message: SendMailJob): Promise<void> {
@@ -77,5 +78,43 @@ export async function mailIfLongRun(boss: PgBoss, runId: string): Promise<void> 
     await notifyRunFinished(config, { send: (queue, data) => sendJob(boss, queue, data) }, run);
   } catch (err) {
     console.error(`[mail] long-run notice for run ${runId} failed:`, err);
+  }
+}
+
+/**
+ * After a study case ended (worker side): when it was the study's last open case, records
+ * 'study-finished' in the audit log and mails the study's creator. An advisory lock on the study
+ * and the audit line make it happen once even when two workers end the last cases together; a
+ * cancelled study sends nothing. Never throws.
+ */
+export async function noteStudyFinishedIfLast(boss: PgBoss, sequelize: Sequelize, caseId: string): Promise<void> {
+  try {
+    const [row] = await sequelize.query<{ study_id: string }>('SELECT study_id FROM study_cases WHERE id = $1', { bind: [caseId], type: QueryTypes.SELECT });
+    if (!row) return;
+    const studyId = row.study_id;
+    const finished = await sequelize.transaction(async (transaction) => {
+      await sequelize.query('SELECT pg_advisory_xact_lock(hashtext($1))', { bind: [`study-finished:${studyId}`], transaction });
+      const [counts] = await sequelize.query<{ open: string; failed: string }>(
+        `SELECT count(*) FILTER (WHERE status IN ('queued','running')) AS open, count(*) FILTER (WHERE status = 'failed') AS failed
+           FROM study_cases WHERE study_id = $1`,
+        { bind: [studyId], type: QueryTypes.SELECT, transaction },
+      );
+      if (!counts || Number(counts.open) > 0) return null;
+      const study = await TradeStudyModel.findByPk(studyId, { transaction });
+      if (!study || study.cancelRequested) return null;
+      const already = await AuditEntryModel.findOne({ where: { entityType: 'study', entityId: studyId, action: 'study-finished' }, transaction });
+      if (already) return null;
+      const failedCases = Number(counts.failed);
+      await audit(
+        { userId: null, missionId: study.missionId, action: 'study-finished', entityType: 'study', entityId: studyId, detail: { caseCount: study.caseCount, failedCases } },
+        transaction,
+      );
+      return { id: study.id, missionId: study.missionId, name: study.name, createdBy: study.createdBy, caseCount: study.caseCount, failedCases };
+    });
+    if (!finished) return;
+    const config = loadConfig(process.env, mailConfigSchema);
+    await notifyStudyFinished(config, { send: (queue, data) => sendJob(boss, queue, data) }, finished);
+  } catch (err) {
+    console.error(`[mail] study-finished notice after case ${caseId} failed:`, err);
   }
 }
