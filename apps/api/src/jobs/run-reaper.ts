@@ -1,6 +1,7 @@
 import type PgBoss from 'pg-boss';
 import type { Sequelize } from 'sequelize';
 import { takeBackRuns, type RequeuedRun } from './run-lease';
+import { reapStaleStudyCases } from './study-case-reaper';
 
 /**
  * Takes back every running run whose worker has not reported for `staleSeconds` (the worker died,
@@ -30,9 +31,12 @@ export function startRunReaper(sequelize: Sequelize, boss: PgBoss, staleSeconds:
   const tick = () => {
     if (pass) return;
     pass = reapStaleRuns(sequelize, boss, staleSeconds)
-      .then((runs) => {
+      .then(async (runs) => {
         for (const run of runs) console.log(`[worker] run ${run.id} taken back from ${run.workerId ?? 'an unknown worker'}: ${run.status}`);
-        if (runs.some((r) => r.status === 'queued')) onRequeued();
+        // Study cases follow the same lease rule as runs.
+        const cases = await reapStaleStudyCases(sequelize, boss, staleSeconds);
+        if (cases.length > 0) console.log(`[worker] ${cases.length} study case(s) taken back from workers that stopped reporting`);
+        if (runs.some((r) => r.status === 'queued') || cases.length > 0) onRequeued();
       })
       // A failed pass (database briefly away) is retried at the next tick.
       .catch((err: unknown) => console.error('[worker] reaper pass failed:', err))

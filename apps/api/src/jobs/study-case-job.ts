@@ -3,7 +3,7 @@
  * the slot claims the case row with a guarded UPDATE, computes in its own thread (compute-thread.ts)
  * with a heartbeat every second that also reads the study's cancel flag, and stores the budget line
  * values only if it still holds the case. A case whose worker died (no heartbeat for the stale
- * period) is claimed again by the job's pg-boss retry after expiry.
+ * period) is taken back by the reaper every worker runs (study-case-reaper.ts) and queued again.
  */
 import type PgBoss from 'pg-boss';
 import { QueryTypes, type Sequelize } from 'sequelize';
