@@ -23,7 +23,8 @@ describe('study cases of a worker that stopped reporting', () => {
     api = await startApi();
     boss = await openQueue(api.config.PL_DATABASE_URL, { maxConnections: 2, maintenance: false });
     missionId = await missionIdBySlug('corvina-2');
-    const { requirements: _r, vehicle: _v, ...spiral } = structuredClone(halyardScenario) as Record<string, unknown>;
+    // Without the file's name: createScenarioRows then makes a unique one (other files use this scenario too).
+    const { requirements: _r, vehicle: _v, name: _n, ...spiral } = structuredClone(halyardScenario) as Record<string, unknown>;
     const rows = await createScenarioRows(api.sequelize, missionId, { ...spiral, spanDays: 1, outputStepS: 21_600, forces: { planets: [], srp: true } }, idealSail);
     const engineer = await api.signedIn('engineer');
     const res = await engineer
