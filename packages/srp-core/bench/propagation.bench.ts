@@ -36,20 +36,25 @@ const endPosition = (r: PropagationResult) => {
 };
 
 console.log(`reference loop before: ${referenceLoopNs().toFixed(2)} ns per iteration (lower is a faster stretch)`);
-let best = Infinity;
+// Best of 15: on this shared 2-core machine other load only ever adds time, so the minimum is the
+// run's own cost; the median is printed beside it to show how noisy the machine was.
+const walls: number[] = [];
 let last: PropagationResult | null = null;
-for (let i = 0; i < 7; i += 1) {
+for (let i = 0; i < 15; i += 1) {
   const run = buildScenarioRun(geoScenario, geo.vehicle);
   last = propagate(run.request);
-  best = Math.min(best, last.stats.wallMs);
+  walls.push(last.stats.wallMs);
 }
+walls.sort((x, y) => x - y);
+const best = walls[0]!;
+const median = walls[7]!;
 console.log(`reference loop after: ${referenceLoopNs().toFixed(2)} ns per iteration`);
 const reference = propagate(buildScenarioRun({ ...geoScenario, tolerances: { ...geoScenario.tolerances, relTol: 1e-13, absTol: 1e-12 } }, geo.vehicle).request);
 const a = endPosition(last!);
 const b = endPosition(reference);
 console.log(
   `30-day GEO (J2-J6, Sun, Moon, 10 plates, conical shadow, Sun-pointing, rtol 1e-10, 60 s output): ` +
-    `best ${best.toFixed(1)} ms of 7 (target < 50 ms: ${best < 50 ? 'met' : 'not met'}, ratio ${(best / 50).toFixed(2)}); ` +
+    `best ${best.toFixed(1)} ms of 15, median ${median.toFixed(1)} ms (target < 50 ms: ${best < 50 ? 'met' : 'not met'}, ratio ${(best / 50).toFixed(2)}); ` +
     `${last!.stats.steps} steps, ${last!.stats.evaluations} evaluations, ${last!.sampleCount} samples, ${last!.events.length} eclipse events`,
 );
 console.log(`accuracy traded: end position differs from the rtol 1e-13 run (${reference.stats.steps} steps) by ${Math.hypot(a[0]! - b[0]!, a[1]! - b[1]!, a[2]! - b[2]!).toFixed(3)} m`);

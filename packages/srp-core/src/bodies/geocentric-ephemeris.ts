@@ -10,29 +10,30 @@ import { moonPositionEci, sunPositionEci } from './ephemeris';
 
 /** Segment and degree choices; the defaults keep the interpolation error far below the theories' own. */
 export interface GeocentricEphemerisOptions {
-  /** Sun segment length (s); default 8 days. */
+  /** Sun segment length (s); default 4 days. */
   sunSegmentSeconds?: number;
-  /** Sun polynomial degree; default 12. */
+  /** Sun polynomial degree; default 9. */
   sunDegree?: number;
-  /** Moon segment length (s); default 2 days. */
+  /** Moon segment length (s); default 1 day. */
   moonSegmentSeconds?: number;
-  /** Moon polynomial degree; default 12. */
+  /** Moon polynomial degree; default 9. */
   moonDegree?: number;
 }
 
 /**
- * Default Sun segment (s): 8 days. With degree 12 the measured interpolation error is about 1 cm
+ * Default Sun segment (s): 4 days. With degree 9 the measured interpolation error is about 1.4 cm
  * (the float rounding of the time argument, 0.2 µs × 30 km/s, not the polynomial; see the test),
- * against a theory accurate to kilometres.
+ * against a theory accurate to kilometres. Shorter segments of lower degree than the 8 days at
+ * degree 12 used before: the same error, and a quarter fewer Clenshaw steps in the inner loop.
  */
-export const DEFAULT_SUN_SEGMENT_SECONDS = 8 * 86_400;
+export const DEFAULT_SUN_SEGMENT_SECONDS = 4 * 86_400;
 /**
- * Default Moon segment (s): 2 days. With degree 12 the measured error is below 1 mm (see the
- * test); 8-day segments would already reach 0.1 m.
+ * Default Moon segment (s): 1 day. With degree 9 the measured error is about 0.5 mm (see the
+ * test); 8-day segments of degree 10 reach metres.
  */
-export const DEFAULT_MOON_SEGMENT_SECONDS = 2 * 86_400;
+export const DEFAULT_MOON_SEGMENT_SECONDS = 1 * 86_400;
 /** Default polynomial degree for both bodies. */
-export const DEFAULT_EPHEMERIS_DEGREE = 12;
+export const DEFAULT_EPHEMERIS_DEGREE = 9;
 
 /** Sun and Moon positions (m, ECI EQJ) at any time of a fitted span; evaluation allocates nothing. */
 export interface GeocentricEphemeris {
