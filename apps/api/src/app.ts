@@ -24,6 +24,7 @@ import { studyRoutes } from './routes/study-routes';
 import { reviewRoutes } from './routes/review-routes';
 import { commentRoutes } from './routes/comment-routes';
 import { mailRoutes } from './routes/mail-routes';
+import { meshRoutes } from './routes/mesh-routes';
 import type { RouteContext } from './routes/route-context';
 import type { JobSender } from './jobs/job-sender';
 import { createJobSender } from './jobs/pg-boss-sender';
@@ -60,6 +61,7 @@ export function createApp(config: Config, sequelize: Sequelize, jobs: JobSender 
   api.use(reviewRoutes(ctx));
   api.use(commentRoutes(ctx));
   api.use(mailRoutes(ctx));
+  api.use(meshRoutes(ctx));
   api.use((req) => {
     throw new AppError('not_found', `no API route ${req.method} /api${req.path}`);
   });

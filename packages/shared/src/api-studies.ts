@@ -136,6 +136,8 @@ export const studyListSchema = z.object({ studies: z.array(studySchema) });
 export type StudyList = z.infer<typeof studyListSchema>;
 
 export const studyCaseSchema = z.object({
+  /** The case's id: the subject of comments on this case (subjectType 'case'). */
+  id: z.uuid(),
   index: z.int(),
   status: studyCaseStatusSchema,
   parameters: z.record(z.string(), z.number()),

@@ -2,6 +2,7 @@ import { z } from 'zod';
 import { missionParamsSchema } from './missions';
 import { vehicleKinds, vehicleSpecSchema } from './vehicle';
 import { scenarioSchema } from './scenario';
+import { coefficientTableSummarySchema, meshFormats } from './api-meshes';
 
 /*
  * Request and response schemas of the vehicle, upload, scenario and audit routes
@@ -119,6 +120,8 @@ export type VehicleRevision = z.infer<typeof vehicleRevisionSchema>;
 export const vehicleDetailSchema = vehicleListItemSchema.extend({
   revisions: z.array(vehicleRevisionSummarySchema),
   latestSpec: vehicleSpecSchema,
+  /** A mesh vehicle's coefficient table (status and progress); absent for other kinds. */
+  coefficientTable: coefficientTableSummarySchema.nullable().optional(),
 });
 export type VehicleDetail = z.infer<typeof vehicleDetailSchema>;
 
@@ -159,7 +162,7 @@ export type VehicleCompare = z.infer<typeof vehicleCompareSchema>;
 // Uploads
 
 /** Kinds of uploaded file. */
-export const uploadKinds = ['plate-set', 'attitude-profile'] as const;
+export const uploadKinds = ['plate-set', 'attitude-profile', 'mesh'] as const;
 export const uploadKindSchema = z.enum(uploadKinds, { error: `kind must be one of ${uploadKinds.join(', ')}` });
 export type UploadKindName = z.infer<typeof uploadKindSchema>;
 
@@ -261,6 +264,14 @@ export const attitudeProfileUploadSummarySchema = z.object({
   timeColumn: z.enum(['time_utc', 't_s']),
 });
 
+/** What a stored mesh file holds: the mesh imported from it (`GET .../meshes/:meshId`). */
+export const meshUploadSummarySchema = z.object({
+  meshId: z.uuid(),
+  format: z.enum(meshFormats),
+  triangleCount: z.number().int(),
+  droppedDegenerate: z.number().int(),
+});
+
 const uploadBase = {
   id: z.uuid(),
   missionId: z.uuid(),
@@ -278,6 +289,7 @@ const uploadBase = {
 export const uploadSchema = z.discriminatedUnion('kind', [
   z.object({ kind: z.literal('plate-set'), ...uploadBase, summary: plateSetUploadSummarySchema }),
   z.object({ kind: z.literal('attitude-profile'), ...uploadBase, summary: attitudeProfileUploadSummarySchema }),
+  z.object({ kind: z.literal('mesh'), ...uploadBase, summary: meshUploadSummarySchema }),
 ]);
 export type Upload = z.infer<typeof uploadSchema>;
 

@@ -64,8 +64,17 @@ export {
   initialOrbitSchema,
 } from './orbit';
 export type { OrbitFrame, CentralBody, KeplerianOrbit, CartesianOrbit, InitialOrbit } from './orbit';
-export { vehicleSpecSchema, vehicleKinds, materialPresetKeys, sailOpticsPresetKeys } from './vehicle';
-export type { VehicleSpec } from './vehicle';
+export {
+  vehicleSpecSchema,
+  vehicleKinds,
+  materialPresetKeys,
+  sailOpticsPresetKeys,
+  meshTableStepsDeg,
+  meshSamplesPerFacet,
+  meshGroupOpticsSchema,
+  meshTableSettingsSchema,
+} from './vehicle';
+export type { VehicleSpec, MeshGroupOptics, MeshTableSettings } from './vehicle';
 export { forceCommandSchema, eclipsesCommandSchema, shadowModelNames, eclipseBodyChoices } from './cli';
 export type { ForceCommand, EclipsesCommand } from './cli';
 export {
@@ -93,6 +102,7 @@ export {
 export type { Scenario } from './scenario';
 export * from './runs';
 export * from './api-vehicles';
+export * from './api-meshes';
 export * from './api-runs';
 export * from './api-results';
 export * from './api-studies';

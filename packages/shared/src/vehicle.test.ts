@@ -137,7 +137,7 @@ describe('vehicleSpecSchema refuses bad vehicles, naming the field', () => {
   });
 
   it('an unknown kind', () => {
-    expect(errorsFor({ kind: 'mesh', name: 'm' })).toEqual({ kind: 'kind must be one of cannonball, plates, sail' });
+    expect(errorsFor({ kind: 'wireframe', name: 'm' })).toEqual({ kind: 'kind must be one of cannonball, plates, sail, mesh' });
   });
 
   it('a cannonball Cr above 2', () => {
@@ -151,5 +151,37 @@ describe('vehicleSpecSchema refuses bad vehicles, naming the field', () => {
     const optics = { r: 1.2, s: 0.9, emissivityFront: 0.05, emissivityBack: 0.6, nonLambertianFront: 0.8, nonLambertianBack: 0.6 };
     expect(errorsFor({ ...sail, optics })['optics.r']).toBe('r must be at most 1');
     expect(errorsFor({ ...sail, optics: 'heliogyro' })['optics']).toMatch(/'ideal', one of mcinnes-square-sail/);
+  });
+});
+
+describe('vehicleSpecSchema, mesh vehicles', () => {
+  const goodMesh = () => ({
+    kind: 'mesh',
+    name: 'Bus mesh',
+    massKg: 900,
+    centreOfMassM: [0, 0, 0],
+    meshId: '7b3f1d2e-4c5a-4e6f-8a9b-0c1d2e3f4a5b',
+    optics: { default: { front: 'mli-kapton' }, groups: { wing: { front: 'solar-cell', back: 'solar-array-back' } } },
+  });
+
+  it('fills the table settings with their defaults (5°, 4 samples, no bounce)', () => {
+    const v = vehicleSpecSchema.parse(goodMesh());
+    expect(v.kind === 'mesh' && v.table).toEqual({ stepDeg: 5, samplesPerFacet: 4, specularBounce: false });
+  });
+
+  it('refuses a grid step that does not divide 180 and a sample count that is not a square, naming the field', () => {
+    const errors = errorsFor({ ...goodMesh(), table: { stepDeg: 7, samplesPerFacet: 5 } });
+    expect(errors['table.stepDeg']).toMatch(/stepDeg must be one of 1, 2, 3, 4, 5, 6, 9, 10, 12, 15/);
+    expect(errors['table.samplesPerFacet']).toMatch(/samplesPerFacet must be one of 1, 4, 9/);
+  });
+
+  it('refuses group optics that do not add up and a mesh id that is not a UUID', () => {
+    const errors = errorsFor({
+      ...goodMesh(),
+      meshId: 'bus.obj',
+      optics: { default: { front: { absorbed: 0.5, specular: 0.2, diffuse: 0.2 } } },
+    });
+    expect(errors.meshId).toMatch(/UUID/);
+    expect(errors['optics.default.front']).toMatch(/must equal 1/);
   });
 });

@@ -25,7 +25,7 @@ export const materialPresetKeys = [
 export const sailOpticsPresetKeys = ['mcinnes-square-sail'] as const;
 
 /** The vehicle kinds. */
-export const vehicleKinds = ['cannonball', 'plates', 'sail'] as const;
+export const vehicleKinds = ['cannonball', 'plates', 'sail', 'mesh'] as const;
 
 /** Allowed deviation of absorbed + specular + diffuse from 1 (rounding of decimal inputs). */
 const OPTICS_SUM_TOLERANCE = 1e-9;
@@ -227,8 +227,60 @@ const sailSpecSchema = strict('vehicle', {
   }),
 });
 
-/** A vehicle file: a cannonball, a set of flat plates or a solar sail, told apart by `kind`. */
-export const vehicleSpecSchema = z.discriminatedUnion('kind', [cannonballSpecSchema, platesSpecSchema, sailSpecSchema], {
+/** Table grid steps (°) a mesh vehicle may use: each divides 180 so the grid meets both poles. */
+export const meshTableStepsDeg = [1, 2, 3, 4, 5, 6, 9, 10, 12, 15] as const;
+/** Samples per facet for partial shading: n² for n = 1..8 (each facet cut into n² equal sub-triangles). */
+export const meshSamplesPerFacet = [1, 4, 9, 16, 25, 36, 49, 64] as const;
+
+/**
+ * Optics of one group of mesh facets. `front` is the side the outward normal points to (counter-
+ * clockwise winding seen from outside); `back`, when given, makes the facets a thin sheet lit from
+ * either side (a solar array, a sunshade); without it light on the back does nothing (a closed
+ * body's inside).
+ */
+export const meshGroupOpticsSchema = strict('group optics', {
+  front: surfaceOptics('front'),
+  back: surfaceOptics('back').optional(),
+});
+export type MeshGroupOptics = z.infer<typeof meshGroupOpticsSchema>;
+
+/** How the coefficient table of a mesh vehicle is computed. */
+export const meshTableSettingsSchema = strict('table', {
+  /** Grid step over the Sun directions (°), polar angle from body +Z and azimuth from +X toward +Y. */
+  stepDeg: z
+    .number({ error: `stepDeg must be one of ${meshTableStepsDeg.join(', ')} (°)` })
+    .refine((v) => (meshTableStepsDeg as readonly number[]).includes(v), `stepDeg must be one of ${meshTableStepsDeg.join(', ')} (°)`)
+    .default(5),
+  /** Shadow-test samples per facet (n²); more samples resolve partial shading more finely. */
+  samplesPerFacet: z
+    .number({ error: `samplesPerFacet must be one of ${meshSamplesPerFacet.join(', ')}` })
+    .refine((v) => (meshSamplesPerFacet as readonly number[]).includes(v), `samplesPerFacet must be one of ${meshSamplesPerFacet.join(', ')}`)
+    .default(4),
+  /** Follow specular reflections from one facet onto another (one bounce). */
+  specularBounce: z.boolean({ error: 'specularBounce must be true or false' }).default(false),
+});
+export type MeshTableSettings = z.infer<typeof meshTableSettingsSchema>;
+
+const meshSpecSchema = strict('vehicle', {
+  kind: z.literal('mesh'),
+  ...base,
+  /** The imported mesh (`POST /api/missions/:missionId/meshes`), already in the body frame, metres. */
+  meshId: z.uuid({ error: 'meshId must be the UUID of a mesh imported into the mission' }),
+  /** Optics by facet group; groups not named use `default`. */
+  optics: strict('optics', {
+    default: meshGroupOpticsSchema,
+    groups: z
+      .record(z.string().min(1, 'group names must not be empty').max(120, 'group names must have at most 120 characters'), meshGroupOpticsSchema, {
+        error: 'groups must map group names to {front, back?}',
+      })
+      .optional(),
+  }),
+  /** The coefficient table's grid and sampling; SRP during propagation is interpolated from it. */
+  table: meshTableSettingsSchema.prefault({}),
+});
+
+/** A vehicle file: a cannonball, a set of flat plates, a solar sail or a mesh, told apart by `kind`. */
+export const vehicleSpecSchema = z.discriminatedUnion('kind', [cannonballSpecSchema, platesSpecSchema, sailSpecSchema, meshSpecSchema], {
   error: `kind must be one of ${vehicleKinds.join(', ')}`,
 });
 export type VehicleSpec = z.infer<typeof vehicleSpecSchema>;

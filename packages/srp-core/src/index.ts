@@ -261,3 +261,37 @@ export type { EphemerisCsvRowOptions } from './exports/csv-ephemeris';
 export { oemHeader, oemDataLines } from './exports/oem';
 export type { OemDataLineOptions } from './exports/oem';
 export { ephemerisCsvRowBytes } from './exports/csv-ephemeris';
+export { readMesh, detectMeshFileFormat, meshRotationMatrix, DEGENERATE_AREA_FRACTION } from './mesh/read-mesh';
+export type {
+  ReadMeshOptions,
+  MeshImport,
+  MeshGroupSummary,
+  MeshLengthUnit,
+  MeshFileFormat,
+  MeshFileErrorDetails,
+} from './mesh/read-mesh';
+export type { MeshTableSpec } from './vehicles/vehicle-spec';
+export type {
+  TriangleMesh,
+  MeshGroupOpticsInput,
+  MeshOpticsInput,
+  CoefficientTableSettings,
+  SrpCoefficientTable,
+} from './mesh/mesh-types';
+export { createMeshScene, FRONT_UNSHADOWABLE, BACK_UNSHADOWABLE, RAY_OFFSET_RELATIVE } from './mesh/mesh-scene';
+export type { MeshScene } from './mesh/mesh-scene';
+export { illuminateMesh, createMeshIllumination, samplePattern, MAX_SAMPLES_PER_SIDE } from './mesh/illuminate-mesh';
+export type { IlluminateOptions, MeshIllumination } from './mesh/illuminate-mesh';
+export {
+  coefficientTableShape,
+  tableNodeDirection,
+  computeCoefficientTableRows,
+  assembleCoefficientTable,
+  computeCoefficientTable,
+  checkCoefficientTable,
+  interpolateCoefficientTable,
+  TABLE_NODE_STRIDE,
+} from './mesh/coefficient-table';
+export type { CoefficientTableShape, CoefficientTableRows, TableProgressHooks } from './mesh/coefficient-table';
+export { buildMeshBvh, anyHit, closestHit, createMeshRay } from './mesh/mesh-bvh';
+export type { MeshBvh, MeshRay } from './mesh/mesh-bvh';

@@ -7,6 +7,8 @@ import { StudyCaseSlot } from './study-case-job';
 import { STUDY_CASE_QUEUE } from '../services/study-service';
 import { MailSlot } from '../services/mail-delivery';
 import { SEND_MAIL_QUEUE } from '../services/mail-service';
+import { TableChunkSlot } from './coefficient-table-job';
+import { TABLE_CHUNK_QUEUE } from '../services/coefficient-table-service';
 
 /** What a worker gives each of its job slots. */
 export interface JobContext {
@@ -42,4 +44,5 @@ export const jobDefinitions: JobDefinition[] = [
   { queue: PROPAGATION_QUEUE, createSlot: (context) => new PropagationSlot(context, os.hostname()) },
   { queue: SEND_MAIL_QUEUE, createSlot: (context) => new MailSlot(context) },
   { queue: STUDY_CASE_QUEUE, createSlot: (context) => new StudyCaseSlot(context, os.hostname()) },
+  { queue: TABLE_CHUNK_QUEUE, createSlot: (context) => new TableChunkSlot(context, os.hostname()) },
 ];

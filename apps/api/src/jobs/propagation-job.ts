@@ -10,6 +10,7 @@ import type { z } from 'zod';
 import { fieldErrors, propagationJobSchema, scenarioSchema, vehicleSpecSchema } from '@photon-ledger/shared';
 import { UploadModel, VehicleRevisionModel } from '../models';
 import type { RunOutcome } from '../services/run-outcome';
+import { loadVehicleTable, VehicleTableError } from '../services/coefficient-table-service';
 import { ComputeThread, type Computation } from './compute-thread';
 import { mailIfLongRun } from '../services/mail-delivery';
 import { claimRun, finishSucceeded, finishWithoutResult, heartbeat, takeBackRuns, type ClaimedRun } from './run-lease';
@@ -40,6 +41,14 @@ async function loadRunInput(run: ClaimedRun): Promise<RunThreadInput> {
   if (!vehicle.success) throw new RunInputError(firstIssue('vehicle', vehicle.error));
 
   const input: RunThreadInput = { scenario: scenario.data, vehicle: vehicle.data, vehicleRevisionId: run.vehicleRevisionId };
+  if (vehicle.data.kind === 'mesh') {
+    try {
+      input.meshTable = await loadVehicleTable(vehicle.data);
+    } catch (err) {
+      if (err instanceof VehicleTableError) throw new RunInputError(err.message);
+      throw err;
+    }
+  }
   const attitude = scenario.data.attitude;
   if (attitude.law === 'tabulated' && attitude.profileId) {
     const upload = await UploadModel.unscoped().findOne({

@@ -2,6 +2,7 @@ import type PgBoss from 'pg-boss';
 import type { Sequelize } from 'sequelize';
 import { takeBackRuns, type RequeuedRun } from './run-lease';
 import { reapStaleStudyCases } from './study-case-reaper';
+import { reapStaleTableChunks } from './coefficient-table-job';
 
 /**
  * Takes back every running run whose worker has not reported for `staleSeconds` (the worker died,
@@ -36,7 +37,10 @@ export function startRunReaper(sequelize: Sequelize, boss: PgBoss, staleSeconds:
         // Study cases follow the same lease rule as runs.
         const cases = await reapStaleStudyCases(sequelize, boss, staleSeconds);
         if (cases.length > 0) console.log(`[worker] ${cases.length} study case(s) taken back from workers that stopped reporting`);
-        if (runs.some((r) => r.status === 'queued') || cases.length > 0) onRequeued();
+        // So do coefficient-table chunks (queued again once, then failed).
+        const chunks = await reapStaleTableChunks(sequelize, boss, staleSeconds);
+        if (chunks.length > 0) console.log(`[worker] ${chunks.length} coefficient-table chunk(s) taken back from workers that stopped reporting`);
+        if (runs.some((r) => r.status === 'queued') || cases.length > 0 || chunks.length > 0) onRequeued();
       })
       // A failed pass (database briefly away) is retried at the next tick.
       .catch((err: unknown) => console.error('[worker] reaper pass failed:', err))

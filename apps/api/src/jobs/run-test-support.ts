@@ -8,7 +8,8 @@ import type { Sequelize, Transaction } from 'sequelize';
 import { runSchema, scenarioSchema, vehicleSpecSchema, type Run, type Scenario, type VehicleSpec } from '@photon-ledger/shared';
 import corvinaVehicleFile from '@photon-ledger/fixtures/vehicles/corvina-2.vehicle.json' with { type: 'json' };
 import corvinaScenario from '@photon-ledger/fixtures/scenarios/corvina-2-geo-30d.scenario.json' with { type: 'json' };
-import { MissionModel, ScenarioModel, UploadModel, VehicleModel, VehicleRevisionModel } from '../models';
+import { MeshModel, MissionModel, ScenarioModel, UploadModel, VehicleModel, VehicleRevisionModel } from '../models';
+import { listingColumnsOf } from '../services/vehicle-service';
 
 /** The demo GEO satellite (fixtures/vehicles/corvina-2.vehicle.json). */
 export function corvinaVehicle(): VehicleSpec {
@@ -51,16 +52,14 @@ export async function createScenarioRows(
   if (!transaction) return sequelize.transaction((t) => createScenarioRows(sequelize, missionId, changes, vehicle, t));
   const tag = randomUUID().slice(0, 8);
   const v = await VehicleModel.create({ missionId, name: `${vehicle.name} ${tag}`, kind: vehicle.kind, latestRevision: 1, createdBy: null }, { transaction });
-  const areas = vehicle.kind === 'plates' ? vehicle.plates.map((p) => p.areaM2) : [vehicle.areaM2];
+  // A mesh vehicle lists its mesh's triangles and area (its table is the caller's business).
+  const mesh = vehicle.kind === 'mesh' ? await MeshModel.findByPk(vehicle.meshId, { attributes: ['triangleCount', 'totalAreaM2'], transaction }) : null;
   const revision = await VehicleRevisionModel.create(
     {
       vehicleId: v.id,
       revision: 1,
       spec: vehicle,
-      kind: vehicle.kind,
-      massKg: vehicle.massKg,
-      surfaceCount: areas.length,
-      totalAreaM2: areas.reduce((a, b) => a + b, 0),
+      ...listingColumnsOf(vehicle, mesh ?? undefined),
       sourceUploadId: null,
       createdBy: null,
     },

@@ -3,6 +3,7 @@
  * (run-thread.ts): plain data only, cloned or transferred by postMessage.
  */
 import type { Scenario, VehicleSpec } from '@photon-ledger/shared';
+import type { SrpCoefficientTable } from '@photon-ledger/srp-core';
 import type { RunOutcome } from '../services/run-outcome';
 
 /** What the computation needs, loaded from the database by the main thread. */
@@ -12,6 +13,8 @@ export interface RunThreadInput {
   vehicleRevisionId: string;
   /** Text of the uploaded attitude profile (CSV) when the attitude law names one; parsed in the thread. */
   attitudeCsv?: string;
+  /** A mesh vehicle's coefficient table, loaded from the database. */
+  meshTable?: SrpCoefficientTable;
 }
 
 /** workerData of a run thread. */

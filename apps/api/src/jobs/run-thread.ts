@@ -33,6 +33,7 @@ function compute({ token, input }: RunThreadRequest): void {
         vehicle: input.vehicle,
         vehicleRevisionId: input.vehicleRevisionId,
         ...(attitudeProfile ? { attitudeProfile } : {}),
+        ...(input.meshTable ? { meshTable: input.meshTable } : {}),
       },
       {
         onProgress: (fraction) => post({ token, kind: 'progress', fraction }),

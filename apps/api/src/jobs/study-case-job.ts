@@ -11,6 +11,8 @@ import { fieldErrors, scenarioSchema, studyCaseJobSchema, vehicleSpecSchema, typ
 import { caseSpecs } from '../services/study-design';
 import { noteStudyFinishedIfLast } from '../services/mail-delivery';
 import { STUDY_CASE_QUEUE } from '../services/study-service';
+import { loadVehicleTable, VehicleTableError } from '../services/coefficient-table-service';
+import type { SrpCoefficientTable } from '@photon-ledger/srp-core';
 import { ComputeThread, type Computation } from './compute-thread';
 import { failureMessage, heartbeatIntervalMs } from './propagation-job';
 import { sendJob } from './queue';
@@ -174,8 +176,24 @@ export class StudyCaseSlot implements JobSlot {
       return;
     }
 
+    // A mesh vehicle's case varies mass or centre of mass only: the base's table serves every case.
+    let meshTable: SrpCoefficientTable | undefined;
+    if (vehicle.data.kind === 'mesh') {
+      try {
+        meshTable = await loadVehicleTable(vehicle.data);
+      } catch (err) {
+        if (!(err instanceof VehicleTableError)) throw err;
+        await finishCase(sequelize, caseId, this.workerId, 'failed', null, err.message);
+        return;
+      }
+    }
     const computation = this.thread.compute(
-      { scenario: scenario.data as Scenario, vehicle: vehicle.data as VehicleSpec, vehicleRevisionId: claimed.vehicleRevisionId },
+      {
+        scenario: scenario.data as Scenario,
+        vehicle: vehicle.data as VehicleSpec,
+        vehicleRevisionId: claimed.vehicleRevisionId,
+        ...(meshTable ? { meshTable } : {}),
+      },
       () => {},
     );
     this.computation = computation;

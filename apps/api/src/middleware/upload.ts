@@ -69,8 +69,8 @@ export async function receiveFile(req: Request, res: Response, maxBytes: number)
   });
   const file = req.file;
   if (!file || !file.buffer) {
-    throw new AppError('validation_failed', `file: attach the CSV as multipart/form-data in the field "${UPLOAD_FIELD}"`, {
-      fields: { [UPLOAD_FIELD]: `attach the CSV as multipart/form-data in the field "${UPLOAD_FIELD}"` },
+    throw new AppError('validation_failed', `file: attach the file as multipart/form-data in the field "${UPLOAD_FIELD}"`, {
+      fields: { [UPLOAD_FIELD]: `attach the file as multipart/form-data in the field "${UPLOAD_FIELD}"` },
     });
   }
   return {

@@ -16,6 +16,9 @@ import { CommentModel } from './comment';
 import { MailMessageModel } from './mail-message';
 import { TradeStudyModel } from './trade-study';
 import { StudyCaseModel } from './study-case';
+import { MeshModel } from './mesh';
+import { CoefficientTableModel } from './coefficient-table';
+import { CoefficientTableChunkModel } from './coefficient-table-chunk';
 
 /** Registers every model and association on a connection. */
 export function initModels(sequelize: Sequelize): void {
@@ -43,6 +46,9 @@ export function initModels(sequelize: Sequelize): void {
   ReviewModel.initModel(sequelize);
   CommentModel.initModel(sequelize);
   MailMessageModel.initModel(sequelize);
+  MeshModel.initModel(sequelize);
+  CoefficientTableModel.initModel(sequelize);
+  CoefficientTableChunkModel.initModel(sequelize);
 }
 
 export { UserModel, toUser } from './user';
@@ -62,3 +68,6 @@ export { StudyCaseModel } from './study-case';
 export { ReviewModel } from './review';
 export { CommentModel } from './comment';
 export { MailMessageModel } from './mail-message';
+export { MeshModel } from './mesh';
+export { CoefficientTableModel, type StoredTableSettings, type StoredTableStats } from './coefficient-table';
+export { CoefficientTableChunkModel } from './coefficient-table-chunk';

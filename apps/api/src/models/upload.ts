@@ -1,7 +1,7 @@
 import { DataTypes, Model, type CreationOptional, type InferAttributes, type InferCreationAttributes, type Sequelize } from 'sequelize';
 
 /** Kinds of uploaded file. */
-export type UploadKind = 'plate-set' | 'attitude-profile';
+export type UploadKind = 'plate-set' | 'attitude-profile' | 'mesh';
 
 /** A file uploaded into a mission, kept whole in PostgreSQL with its size and SHA-256. */
 export class UploadModel extends Model<InferAttributes<UploadModel>, InferCreationAttributes<UploadModel>> {

@@ -24,6 +24,7 @@ import { runRoutes } from './catalogue-runs';
 import { resultRoutes } from './catalogue-results';
 import { studyRouteDocs } from './catalogue-studies';
 import { reviewRouteDocs } from './catalogue-reviews';
+import { meshRouteDocs } from './catalogue-meshes';
 
 /**
  * Who may call a route: `public` (no sign-in), `signed-in` (any role), `admin`, `admin-or-lead`,
@@ -134,4 +135,4 @@ const coreRoutes: RouteDoc[] = [
 ];
 
 /** Every route, in the order the document lists them. */
-export const routeCatalogue: RouteDoc[] = [...coreRoutes, ...inputRoutes, ...runRoutes, ...resultRoutes, ...studyRouteDocs, ...reviewRouteDocs];
+export const routeCatalogue: RouteDoc[] = [...coreRoutes, ...inputRoutes, ...runRoutes, ...resultRoutes, ...studyRouteDocs, ...reviewRouteDocs, ...meshRouteDocs];

@@ -135,6 +135,47 @@ describe('permissions: every route × every role', () => {
     return sharedStudyId;
   }
 
+  let sharedMeshId: string | null = null;
+  /** One imported mesh (the demo box-wing) for the mesh and table routes, made on first use. */
+  async function sharedMesh(): Promise<string> {
+    if (sharedMeshId) return sharedMeshId;
+    const res = await agents.engineer
+      .post(`/api/missions/${corvina}/meshes`)
+      .field('units', 'm')
+      .field('name', `Permissions mesh ${randomUUID().slice(0, 8)}`)
+      .attach('file', fixture('meshes/corvina-2-box-wing.obj'), 'box-wing.obj');
+    expect(res.status, JSON.stringify(res.body)).toBe(201);
+    sharedMeshId = res.body.id as string;
+    return sharedMeshId;
+  }
+
+  /** A table request whose optics no earlier call used (so an allowed call creates a table: 201). */
+  function tableBody(): object {
+    const absorbed = Math.round(Math.random() * 1e6) / 1e7;
+    return { optics: { default: { front: { absorbed, specular: 0.3, diffuse: 0.7 - absorbed } } }, table: { stepDeg: 15, samplesPerFacet: 1 } };
+  }
+
+  /** A new queued table of the shared mesh (no worker runs here). */
+  async function newTable(): Promise<string> {
+    const res = await agents.engineer.post(`/api/missions/${corvina}/meshes/${await sharedMesh()}/tables`).send(tableBody());
+    expect(res.status, JSON.stringify(res.body)).toBe(201);
+    return res.body.id as string;
+  }
+
+  let doneTableId: string | null = null;
+  /** A table marked succeeded with zero values written straight into its row (no worker runs here). */
+  async function doneTable(): Promise<string> {
+    if (doneTableId) return doneTableId;
+    const id = await newTable();
+    await api.sequelize.query(
+      `UPDATE coefficient_tables SET status = 'succeeded', progress = 1, finished_at = now(),
+              data = decode(repeat('00', 48 * polar_count * azimuth_count), 'hex') WHERE id = :id`,
+      { replacements: { id } },
+    );
+    doneTableId = id;
+    return id;
+  }
+
   /** A queued run (no worker runs in this test, so it stays queued). */
   async function queuedRun(): Promise<string> {
     const res = await agents.engineer.post(`/api/missions/${corvina}/runs`).send({ scenarioId });
@@ -262,6 +303,18 @@ describe('permissions: every route × every role', () => {
     'get /missions/:missionId/studies/:studyId/pareto': async (who) => ({ url: `/missions/${mission(who)}/studies/${await sharedStudy()}/pareto?x=srp.accel.max&y=torque.max` }),
     'get /missions/:missionId/studies/:studyId/best': async (who) => ({ url: `/missions/${mission(who)}/studies/${await sharedStudy()}/best?line=srp.accel.max` }),
     'get /missions/:missionId/studies/:studyId/export/cases.csv': async (who) => ({ url: `/missions/${mission(who)}/studies/${await sharedStudy()}/export/cases.csv` }),
+    // Meshes and coefficient tables (no worker runs here: new tables stay queued).
+    'post /missions/:missionId/meshes': async (who) => ({
+      url: `/missions/${mission(who)}/meshes`,
+      file: { name: 'box-wing.obj', bytes: fixture('meshes/corvina-2-box-wing.obj'), fields: { units: 'm', name: `Mesh upload ${randomUUID().slice(0, 8)}` } },
+    }),
+    'get /missions/:missionId/meshes': async (who) => ({ url: `/missions/${mission(who)}/meshes` }),
+    'get /missions/:missionId/meshes/:meshId': async (who) => ({ url: `/missions/${mission(who)}/meshes/${await sharedMesh()}` }),
+    'get /missions/:missionId/meshes/:meshId/geometry': async (who) => ({ url: `/missions/${mission(who)}/meshes/${await sharedMesh()}/geometry` }),
+    'post /missions/:missionId/meshes/:meshId/tables': async (who) => ({ url: `/missions/${mission(who)}/meshes/${await sharedMesh()}/tables`, body: tableBody() }),
+    'get /missions/:missionId/coefficient-tables/:tableId': async (who) => ({ url: `/missions/${mission(who)}/coefficient-tables/${await doneTable()}` }),
+    'get /missions/:missionId/coefficient-tables/:tableId/data': async (who) => ({ url: `/missions/${mission(who)}/coefficient-tables/${await doneTable()}/data` }),
+    'post /missions/:missionId/coefficient-tables/:tableId/cancel': async (who) => ({ url: `/missions/${mission(who)}/coefficient-tables/${await newTable()}/cancel` }),
   };
 
   it('has a valid request for every catalogued route', () => {

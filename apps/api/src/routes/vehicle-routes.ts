@@ -25,7 +25,7 @@ import type { RouteContext } from './route-context';
  * Vehicles and their immutable revisions. Expects `requireUser` in front. There is no route that
  * changes or deletes a revision: an edit is a new revision.
  */
-export function vehicleRoutes(_ctx: RouteContext): Router {
+export function vehicleRoutes(ctx: RouteContext): Router {
   const router = Router();
 
   router.get('/missions/:missionId/vehicles', async (req, res) => {
@@ -39,7 +39,7 @@ export function vehicleRoutes(_ctx: RouteContext): Router {
     const user = currentUser(res);
     await missionFor(user, missionId, 'edit');
     const input = parseInput(vehicleCreateSchema, req.body, 'body');
-    res.status(201).json(await createVehicle(user, missionId, input));
+    res.status(201).json(await createVehicle(user, missionId, input, ctx.jobs));
   });
 
   router.get('/missions/:missionId/vehicles/:vehicleId', async (req, res) => {
@@ -53,7 +53,7 @@ export function vehicleRoutes(_ctx: RouteContext): Router {
     const user = currentUser(res);
     await missionFor(user, missionId, 'edit');
     const input = parseInput(vehicleRevisionCreateSchema, req.body, 'body');
-    res.status(201).json(await createRevision(user, missionId, vehicleId, input));
+    res.status(201).json(await createRevision(user, missionId, vehicleId, input, ctx.jobs));
   });
 
   router.get('/missions/:missionId/vehicles/:vehicleId/revisions/:revision', async (req, res) => {

@@ -1,7 +1,7 @@
 import { readFileSync } from 'node:fs';
 import { describe, expect, it } from 'vitest';
 import { computeBudget, createSampleLayout, type BudgetRequirement } from '@photon-ledger/srp-core';
-import { buildScenarioRun } from '@photon-ledger/srp-core/io';
+import { buildScenarioRun, vehicleFromFile } from '@photon-ledger/srp-core/io';
 import { scenarioSchema } from '@photon-ledger/shared';
 import { demoVehicle } from '../../test/stored-run';
 import { computeRunOutcome } from './run-outcome';
@@ -14,7 +14,7 @@ describe('applyMissionRequirements', () => {
     const scenario = scenarioSchema.parse({ ...raw, vehicle: { ref: 'test' }, spanDays: 0.25, outputStepS: 600 });
     const outcome = computeRunOutcome({ scenario, vehicle, vehicleRevisionId: '00000000-0000-4000-8000-000000000000' })!;
     const history = { layout: createSampleLayout(outcome.layout.forceNames), samples: outcome.samples, sampleCount: outcome.sampleCount };
-    const { budgetContext } = buildScenarioRun(scenario, vehicle);
+    const { budgetContext } = buildScenarioRun(scenario, vehicleFromFile(vehicle));
     const max = outcome.budget.srpAcceleration.max;
     const requirements: BudgetRequirement[] = [
       { line: 'srp.accel.max', comparator: '<=', value: 1.5 * max, minMarginPercent: 10 },

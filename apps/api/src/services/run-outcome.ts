@@ -5,7 +5,7 @@
  * job retried after a worker died still leaves exactly one result.
  */
 import type { Transaction } from 'sequelize';
-import type { AttitudeProfile, PropagationResult, SrpBudget } from '@photon-ledger/srp-core';
+import type { AttitudeProfile, PropagationResult, SrpBudget, SrpCoefficientTable } from '@photon-ledger/srp-core';
 import { computeBudget, EXPORT_CAUTION, formatUtc, INERTIAL_FRAME_LABEL, EPHEMERIS_CSV_COLUMNS, propagate } from '@photon-ledger/srp-core';
 import { buildScenarioRun, vehicleFromFile } from '@photon-ledger/srp-core/io';
 import type { RunEvent, RunSummary, Scenario, VehicleSpec } from '@photon-ledger/shared';
@@ -19,6 +19,8 @@ export interface RunInput {
   vehicleRevisionId: string;
   /** The uploaded profile, when the attitude law names one. */
   attitudeProfile?: AttitudeProfile;
+  /** A mesh vehicle's coefficient table (stored by the table jobs), required for that kind. */
+  meshTable?: SrpCoefficientTable;
 }
 
 /** Everything a succeeded run stores. */
@@ -50,7 +52,8 @@ export function sampleColumns(forceNames: readonly string[]): string[] {
 export function computeRunOutcome(input: RunInput, hooks: RunHooks = {}): RunOutcome | null {
   const { scenario, vehicle } = input;
   // The stored spec is the file form (tracking limits in degrees); srp-core takes radians.
-  const run = buildScenarioRun(scenario, vehicleFromFile(vehicle), input.attitudeProfile);
+  // A mesh vehicle is its coefficient table, interpolated over Sun directions.
+  const run = buildScenarioRun(scenario, vehicleFromFile(vehicle, input.meshTable ? { meshTable: input.meshTable } : {}), input.attitudeProfile);
   const result: PropagationResult = propagate({
     ...run.request,
     ...(hooks.onProgress ? { onProgress: hooks.onProgress } : {}),

@@ -17,7 +17,8 @@ import {
 import { AppError, notFound } from '../errors/app-error';
 import type { JobSender } from '../jobs/job-sender';
 import { PROPAGATION_QUEUE } from '../jobs/queue';
-import { audit, RunModel, ScenarioModel, UploadModel, type MissionModel } from '../models';
+import { audit, RunModel, ScenarioModel, UploadModel, VehicleRevisionModel, type MissionModel } from '../models';
+import { assertVehicleTableReady } from './coefficient-table-service';
 
 /** What run writes need besides the models. */
 export interface RunDeps {
@@ -118,6 +119,9 @@ interface RunSnapshot {
 /** Inserts a queued run, its audit line and its job, all in one transaction. */
 async function queueRun(deps: RunDeps, user: User, mission: MissionModel, snapshot: RunSnapshot): Promise<Run> {
   const { sequelize, jobs } = deps;
+  // A mesh vehicle propagates with its coefficient table: 409 until the table has succeeded.
+  const revision = await VehicleRevisionModel.findByPk(snapshot.vehicleRevisionId, { attributes: ['id', 'spec'] });
+  if (revision) await assertVehicleTableReady(revision.spec, 'the run');
   const runId = await sequelize.transaction(async (transaction) => {
     const run = await RunModel.create(
       {

@@ -27,6 +27,7 @@ import { AppError, notFound } from '../errors/app-error';
 import type { JobSender } from '../jobs/job-sender';
 import { audit, ScenarioModel, StudyCaseModel, TradeStudyModel, VehicleRevisionModel, type MissionModel } from '../models';
 import { checkCases, designCases, type StudyBase } from './study-design';
+import { assertVehicleTableReady } from './coefficient-table-service';
 import { lineStatistics, paretoFront } from './study-statistics';
 
 /** Queue of study cases: one job per case, payload `{ caseId }`. */
@@ -136,6 +137,23 @@ async function loadBase(missionId: string, scenarioId: string): Promise<{ base: 
   return { base: { vehicle: vehicle.data, scenario: spec.data }, vehicleRevisionId: revision.id };
 }
 
+/** Vehicle paths a study over a mesh vehicle may vary: they leave its coefficient table as it is. */
+const MESH_VEHICLE_PATHS = ['vehicle.massKg', 'vehicle.centreOfMassM.0', 'vehicle.centreOfMassM.1', 'vehicle.centreOfMassM.2'];
+
+/**
+ * A mesh vehicle's SRP is its coefficient table (torque about the origin, moved to the centre of
+ * mass per case), so a study may vary its mass and centre of mass; any other vehicle path would
+ * need a new table per case: 400 naming the parameter.
+ */
+function checkMeshVehiclePaths(parameters: readonly { path: string }[]): void {
+  parameters.forEach((p, k) => {
+    if (!p.path.startsWith('vehicle.') || MESH_VEHICLE_PATHS.includes(p.path)) return;
+    const field = `design.parameters.${k}.path`;
+    const message = `${p.path} cannot be varied for a mesh vehicle: its SRP comes from a coefficient table, and each value would need a new table; vary ${MESH_VEHICLE_PATHS.join(', ')} or scenario paths`;
+    throw new AppError('validation_failed', `${field}: ${message}`, { fields: { [field]: message } });
+  });
+}
+
 /**
  * Defines a study and queues its cases (one job each), all in one transaction.
  * @throws AppError 400 naming the field for bad paths, too many cases or a case whose specs are not valid
@@ -143,6 +161,10 @@ async function loadBase(missionId: string, scenarioId: string): Promise<{ base: 
 export async function createStudy(deps: StudyDeps, user: User, mission: MissionModel, input: StudyCreate): Promise<Study> {
   const { sequelize, jobs } = deps;
   const { base, vehicleRevisionId } = await loadBase(mission.id, input.scenarioId);
+  if (base.vehicle.kind === 'mesh') {
+    checkMeshVehiclePaths(input.design.parameters);
+    await assertVehicleTableReady(base.vehicle, 'the study');
+  }
   const cases = designCases(base, input.design);
   checkCases(base, cases);
   const parameterPaths = Object.keys(cases[0] ?? {});
@@ -211,6 +233,7 @@ export async function cancelStudy(deps: StudyDeps, user: User, mission: MissionM
 }
 
 interface CaseRow {
+  id: string;
   case_index: number;
   status: StudyCaseStatus;
   parameters: Record<string, number>;
@@ -219,6 +242,7 @@ interface CaseRow {
 }
 
 const toCase = (row: CaseRow): StudyCase => ({
+  id: row.id,
   index: row.case_index,
   status: row.status,
   parameters: row.parameters,
@@ -266,7 +290,7 @@ export async function listCases(sequelize: Sequelize, mission: MissionModel, stu
   const { where, orderBy, replacements } = caseQueryParts(studyId, query);
   const [count] = await sequelize.query<{ n: string }>(`SELECT count(*) AS n FROM study_cases WHERE ${where}`, { replacements, type: QueryTypes.SELECT });
   const rows = await sequelize.query<CaseRow>(
-    `SELECT case_index, status, parameters, lines, error_message FROM study_cases WHERE ${where} ORDER BY ${orderBy} LIMIT :limit OFFSET :offset`,
+    `SELECT id, case_index, status, parameters, lines, error_message FROM study_cases WHERE ${where} ORDER BY ${orderBy} LIMIT :limit OFFSET :offset`,
     { replacements: { ...replacements, limit: query.limit, offset: query.offset }, type: QueryTypes.SELECT },
   );
   return { total: Number(count?.n ?? 0), cases: rows.map(toCase) };
@@ -277,7 +301,7 @@ export async function* allCases(sequelize: Sequelize, studyId: string, query: Om
   const { where, orderBy, replacements } = caseQueryParts(studyId, query);
   for (let offset = 0; ; offset += pageSize) {
     const rows = await sequelize.query<CaseRow>(
-      `SELECT case_index, status, parameters, lines, error_message FROM study_cases WHERE ${where} ORDER BY ${orderBy} LIMIT :limit OFFSET :offset`,
+      `SELECT id, case_index, status, parameters, lines, error_message FROM study_cases WHERE ${where} ORDER BY ${orderBy} LIMIT :limit OFFSET :offset`,
       { replacements: { ...replacements, limit: pageSize, offset }, type: QueryTypes.SELECT },
     );
     if (rows.length > 0) yield rows.map(toCase);
@@ -287,7 +311,7 @@ export async function* allCases(sequelize: Sequelize, studyId: string, query: Om
 
 async function succeededCases(sequelize: Sequelize, studyId: string): Promise<StudyCase[]> {
   const rows = await sequelize.query<CaseRow>(
-    `SELECT case_index, status, parameters, lines, error_message FROM study_cases WHERE study_id = :studyId AND status = 'succeeded' ORDER BY case_index`,
+    `SELECT id, case_index, status, parameters, lines, error_message FROM study_cases WHERE study_id = :studyId AND status = 'succeeded' ORDER BY case_index`,
     { replacements: { studyId }, type: QueryTypes.SELECT },
   );
   return rows.map(toCase);

@@ -13,18 +13,58 @@ import type {
   VehicleSpec,
 } from '@photon-ledger/shared';
 import { AppError, notFound } from '../errors/app-error';
+import type { JobSender } from '../jobs/job-sender';
 import { VehicleModel, VehicleRevisionModel, audit } from '../models';
 import { authorOf, authorsById } from './audit-service';
+import { ensureTable, missionMeshForTable, resolveMeshOptics, vehicleTableSummary } from './coefficient-table-service';
 
 /** Most changed paths written into one audit line (the compare route gives them all). */
 const AUDIT_PATHS_LIMIT = 20;
 
-/** Columns kept beside each revision's spec so that lists never read the spec. */
-export function listingColumnsOf(spec: VehicleSpec): Pick<VehicleRevisionSummary, 'kind' | 'massKg' | 'surfaceCount' | 'totalAreaM2'> {
+/** What a mesh vehicle's listing columns come from: its mesh's triangles and area. */
+export interface MeshListing {
+  triangleCount: number;
+  totalAreaM2: number;
+}
+
+/**
+ * Columns kept beside each revision's spec so that lists never read the spec. A mesh vehicle
+ * lists its mesh's triangle count and area (`mesh` is required for that kind).
+ */
+export function listingColumnsOf(spec: VehicleSpec, mesh?: MeshListing): Pick<VehicleRevisionSummary, 'kind' | 'massKg' | 'surfaceCount' | 'totalAreaM2'> {
   if (spec.kind === 'plates') {
     return { kind: spec.kind, massKg: spec.massKg, surfaceCount: spec.plates.length, totalAreaM2: spec.plates.reduce((sum, p) => sum + p.areaM2, 0) };
   }
+  if (spec.kind === 'mesh') {
+    if (!mesh) throw new Error('listingColumnsOf: a mesh vehicle needs its mesh');
+    return { kind: spec.kind, massKg: spec.massKg, surfaceCount: mesh.triangleCount, totalAreaM2: mesh.totalAreaM2 };
+  }
   return { kind: spec.kind, massKg: spec.massKg, surfaceCount: 1, totalAreaM2: spec.areaM2 };
+}
+
+/**
+ * For a mesh vehicle: checks that `spec.meshId` is a mesh of the mission and that the optics name
+ * only its groups (400 naming `spec.meshId` / `spec.optics.groups.<name>`), and makes sure its
+ * coefficient table exists or is queued, in the caller's transaction. Returns the mesh's listing
+ * columns; undefined for the other kinds.
+ */
+async function prepareMeshVehicle(
+  transaction: Transaction,
+  jobs: JobSender | undefined,
+  user: User,
+  missionId: string,
+  spec: VehicleSpec,
+): Promise<MeshListing | undefined> {
+  if (spec.kind !== 'mesh') return undefined;
+  const mesh = await missionMeshForTable(missionId, spec.meshId, transaction);
+  if (!mesh) {
+    const message = 'meshId must be the id of a mesh imported into this mission (POST /api/missions/:missionId/meshes)';
+    throw new AppError('validation_failed', `spec.meshId: ${message}`, { fields: { 'spec.meshId': message } });
+  }
+  const optics = resolveMeshOptics(mesh.groups.map((g) => g.name), spec.optics, 'spec.optics');
+  if (!jobs) throw new Error('a mesh vehicle is saved only where jobs can be queued (its coefficient table)');
+  await ensureTable(transaction, jobs, user, mesh, optics, spec.table);
+  return { triangleCount: mesh.triangleCount, totalAreaM2: mesh.totalAreaM2 };
 }
 
 function toRevisionSummary(row: VehicleRevisionModel, authors: Awaited<ReturnType<typeof authorsById>>): VehicleRevisionSummary {
@@ -95,7 +135,13 @@ export async function getVehicleDetail(missionId: string, vehicleId: string): Pr
   const revisions = await VehicleRevisionModel.findAll({ where: { vehicleId }, order: [['revision', 'DESC']], attributes: { exclude: ['spec'] } });
   const latest = await revisionRow(vehicleId, vehicle.latestRevision);
   const authors = await authorsById(revisions.map((r) => r.createdBy));
-  return { ...toListItem(vehicle, latest), revisions: revisions.map((r) => toRevisionSummary(r, authors)), latestSpec: latest.spec };
+  const spec = latest.spec;
+  return {
+    ...toListItem(vehicle, latest),
+    revisions: revisions.map((r) => toRevisionSummary(r, authors)),
+    latestSpec: spec,
+    ...(spec.kind === 'mesh' ? { coefficientTable: await vehicleTableSummary(spec) } : {}),
+  };
 }
 
 /** One revision with its spec. */
@@ -111,6 +157,8 @@ export interface RevisionWrite {
   note?: string | undefined;
   /** The plate-set upload the revision is made from. */
   sourceUploadId?: string | null;
+  /** The queue, for a mesh vehicle's coefficient table. */
+  jobs?: JobSender | undefined;
 }
 
 function revisionResult(user: User, vehicle: VehicleModel, row: VehicleRevisionModel): VehicleSaved {
@@ -130,7 +178,7 @@ export async function insertVehicle(
   spec: VehicleSpec,
   write: RevisionWrite = {},
 ): Promise<VehicleSaved> {
-  const columns = listingColumnsOf(spec);
+  const columns = listingColumnsOf(spec, await prepareMeshVehicle(transaction, write.jobs, user, missionId, spec));
   let vehicle: VehicleModel;
   try {
     vehicle = await VehicleModel.create({ missionId, name, kind: spec.kind, latestRevision: 1, createdBy: user.id }, { transaction });
@@ -186,13 +234,14 @@ export async function insertRevision(
   }
   const latest = await revisionRow(vehicleId, vehicle.latestRevision, transaction);
   const spec = specFrom(latest.spec);
+  const meshListing = await prepareMeshVehicle(transaction, write.jobs, user, missionId, spec);
   const next = vehicle.latestRevision + 1;
   const row = await VehicleRevisionModel.create(
     {
       vehicleId,
       revision: next,
       spec,
-      ...listingColumnsOf(spec),
+      ...listingColumnsOf(spec, meshListing),
       note: write.note ?? '',
       sourceUploadId: write.sourceUploadId ?? null,
       createdBy: user.id,
@@ -223,16 +272,16 @@ export async function insertRevision(
 }
 
 /** `POST .../vehicles`: a vehicle with its revision 1, in one transaction. */
-export async function createVehicle(user: User, missionId: string, input: VehicleCreate): Promise<VehicleSaved> {
+export async function createVehicle(user: User, missionId: string, input: VehicleCreate, jobs?: JobSender): Promise<VehicleSaved> {
   const sequelize = VehicleModel.sequelize!;
-  return sequelize.transaction((transaction) => insertVehicle(transaction, user, missionId, input.name, input.spec, { note: input.note }));
+  return sequelize.transaction((transaction) => insertVehicle(transaction, user, missionId, input.name, input.spec, { note: input.note, jobs }));
 }
 
 /** `POST .../vehicles/:vehicleId/revisions`: the next immutable revision. */
-export async function createRevision(user: User, missionId: string, vehicleId: string, input: VehicleRevisionCreate): Promise<VehicleSaved> {
+export async function createRevision(user: User, missionId: string, vehicleId: string, input: VehicleRevisionCreate, jobs?: JobSender): Promise<VehicleSaved> {
   const sequelize = VehicleModel.sequelize!;
   return sequelize.transaction((transaction) =>
-    insertRevision(transaction, user, missionId, vehicleId, input.basedOnRevision, () => input.spec, { note: input.note }),
+    insertRevision(transaction, user, missionId, vehicleId, input.basedOnRevision, () => input.spec, { note: input.note, jobs }),
   );
 }
 

@@ -16,6 +16,9 @@ import { MailRoute } from './routes/mail-route';
 import { ReviewReportRoute } from './routes/review-report-route';
 import { StudyNewRoute } from './routes/study-new-route';
 import { StudyRoute } from './routes/study-route';
+import { StudyReportRoute } from './routes/study-report-route';
+import { MeshListRoute } from './routes/mesh-list-route';
+import { MeshRoute } from './routes/mesh-route';
 
 /** The route table; tests mount it in a memory router. */
 export const routes: RouteObject[] = [
@@ -42,6 +45,9 @@ export const routes: RouteObject[] = [
           { path: 'missions/:missionId/runs/:runId/report', element: <ReviewReportRoute /> },
           { path: 'missions/:missionId/studies/new', element: <StudyNewRoute /> },
           { path: 'missions/:missionId/studies/:studyId', element: <StudyRoute /> },
+          { path: 'missions/:missionId/studies/:studyId/report', element: <StudyReportRoute /> },
+          { path: 'missions/:missionId/meshes', element: <MeshListRoute /> },
+          { path: 'missions/:missionId/meshes/:meshId', element: <MeshRoute /> },
           { path: 'admin/mail', element: <MailRoute /> },
           { path: '*', element: <NotFoundRoute /> },
         ],

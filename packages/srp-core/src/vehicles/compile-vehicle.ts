@@ -1,4 +1,6 @@
 import { SrpError, requirePositive } from '../errors';
+import { checkCoefficientTable } from '../mesh/coefficient-table';
+import type { SrpCoefficientTable } from '../mesh/mesh-types';
 import type { ReadonlyVec3 } from '../math/vec3';
 import { COEFFICIENT_STRIDE, CompiledVehicle, HOT_ROW_STRIDE, TRACKING_STRIDE } from './compiled-vehicle';
 import { requireDirection } from './flat-plate';
@@ -8,6 +10,7 @@ import { packSunTracking } from './sun-tracking';
 import { surfaceForceCoefficients } from './surface-optics';
 import type {
   CannonballSpec,
+  MeshTableSpec,
   PlateSpec,
   PlateVehicleSpec,
   SailSpec,
@@ -145,7 +148,13 @@ function setRow(a: Float64Array, row: number, v: ReadonlyVec3): void {
   a[3 * row + 2] = v[2];
 }
 
-function finish(p: Packed, crArea: number, sailArea: number, sailNormal: Float64Array): CompiledVehicle {
+function finish(
+  p: Packed,
+  crArea: number,
+  sailArea: number,
+  sailNormal: Float64Array,
+  meshTable: SrpCoefficientTable | null = null,
+): CompiledVehicle {
   const n = p.area.length;
   const hot = new Float64Array(HOT_ROW_STRIDE * n);
   for (let i = 0; i < n; i += 1) {
@@ -183,6 +192,7 @@ function finish(p: Packed, crArea: number, sailArea: number, sailNormal: Float64
     sailArea,
     sailNormal,
     hot,
+    meshTable,
   );
 }
 
@@ -287,13 +297,25 @@ function compileSail(spec: SailSpec): CompiledVehicle {
 }
 
 /**
+ * A mesh vehicle through its coefficient table: one surface 'mesh' without plate data (zero
+ * coefficients), centred on the body origin, which the table's torques are taken about.
+ */
+function compileMesh(spec: MeshTableSpec): CompiledVehicle {
+  const { massKg, com } = checkBase(spec);
+  const table = checkCoefficientTable(spec.table, 'table');
+  const p = allocate(1, 'mesh', spec.name, massKg, com, ['mesh']);
+  return finish(p, 0, 0, new Float64Array(3), table);
+}
+
+/**
  * Checks a vehicle spec once and packs it for `evaluateSrp` (allocates; not for hot paths).
  * Normals and axes are normalised here.
  * @param spec a plain vehicle description (see `VehicleSpec`), SI units, body frame
  * @returns the compiled vehicle
  * @throws SrpError whose `details.field` is the path of the offending input, dot-separated as in
  *   the vehicle file (`massKg`, `plates.3.front.specular`, `plates.1.trackingLimitsRad`,
- *   `optics.r`)
+ *   `optics.r`,
+ *   `table.values.12` for a mesh vehicle's coefficient table)
  */
 export function compileVehicle(spec: VehicleSpec): CompiledVehicle {
   requireObject(spec, 'vehicle');
@@ -304,12 +326,14 @@ export function compileVehicle(spec: VehicleSpec): CompiledVehicle {
       return compilePlates(spec);
     case 'sail':
       return compileSail(spec);
+    case 'mesh':
+      return compileMesh(spec);
     default: {
       const kind: unknown = (spec as { kind?: unknown }).kind;
-      throw new SrpError('invalid_input', `kind must be 'cannonball', 'plates' or 'sail'; got ${String(kind)}`, {
+      throw new SrpError('invalid_input', `kind must be 'cannonball', 'plates', 'sail' or 'mesh'; got ${String(kind)}`, {
         field: 'kind',
         value: kind,
-        limit: 'cannonball | plates | sail',
+        limit: 'cannonball | plates | sail | mesh',
       });
     }
   }

@@ -1,3 +1,4 @@
+import type { SrpCoefficientTable } from '../mesh/mesh-types';
 import type { VehicleKind } from './vehicle-spec';
 
 /** Numbers per surface in `CompiledVehicle.tracking`; the layout is documented in sun-tracking.ts. */
@@ -24,7 +25,9 @@ export const HOT_ROW_STRIDE = 16;
  * shape. Treat it as read-only.
  *
  * A plate-set vehicle has one surface per plate; a sail has one surface (its lit front faces
- * -normal); a cannonball has one surface with no plate data (`cannonballCrAreaM2` > 0).
+ * -normal); a cannonball has one surface with no plate data (`cannonballCrAreaM2` > 0); a mesh
+ * has one surface named 'mesh' with no plate data (area 0, centroid at the body origin, the
+ * reference of the table's torques) and its coefficient table (`meshTable`).
  */
 export class CompiledVehicle {
   constructor(
@@ -60,6 +63,8 @@ export class CompiledVehicle {
     readonly sailNormal: Float64Array,
     /** The evaluation loop's copy of the above, one row of HOT_ROW_STRIDE numbers per surface. */
     readonly hotRows: Float64Array,
+    /** The coefficient table of a mesh vehicle (checked); null for other kinds. */
+    readonly meshTable: SrpCoefficientTable | null,
   ) {}
 
   /** Number of surfaces (the stride-6 per-surface output holds 6 × this many numbers). */

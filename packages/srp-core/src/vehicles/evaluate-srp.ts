@@ -1,6 +1,7 @@
 import type { ReadonlyQuat } from '../attitude/quaternion';
 import { rotateBodyToInertial, rotateInertialToBody } from '../attitude/quaternion';
 import { SrpError } from '../errors';
+import { interpolateCoefficientTable } from '../mesh/coefficient-table';
 import type { ReadonlyVec3, Vec3 } from '../math/vec3';
 import type { CompiledVehicle } from './compiled-vehicle';
 import { UNIT_TOLERANCE } from './flat-plate';
@@ -83,6 +84,10 @@ function refuse(field: string, value: unknown, message: string, limit: string): 
  *   (sun-tracking.ts). Each plate sees the full beam: plates do not shade one another, so model
  *   vehicles whose plates do not (a convex bus with wings beside it); self-shadowing is for
  *   the mesh model.
+ * - mesh: force and torque about the body origin per unit pressure, interpolated bilinearly in
+ *   the Sun direction's (θ, φ) from the vehicle's coefficient table (computed with
+ *   self-shadowing by mesh/coefficient-table.ts), times P f; torque about the centre of mass
+ *   τ = τ_origin - r_CoM × F. One surface, 'mesh'.
  * - sail: McInnes's optical model of a flat sail (`sailForceCoefficients`; McInnes, Solar Sailing,
  *   1999, §2.6), acting at the sail centroid; no force with the Sun behind the sail (the
  *   published coefficients describe light on the front only).
@@ -158,6 +163,33 @@ export function evaluateSrp(
       surfaces[3] = 0;
       surfaces[4] = 0;
       surfaces[5] = 0;
+    }
+    return out;
+  }
+
+  const table = vehicle.meshTable;
+  if (table !== null) {
+    const m = interpolateCoefficientTable(meshScratch, table, sunDirBody);
+    const fx = pf * m[0]!;
+    const fy = pf * m[1]!;
+    const fz = pf * m[2]!;
+    const com = vehicle.centreOfMassM;
+    const cx = com[0]!;
+    const cy = com[1]!;
+    const cz = com[2]!;
+    force[0] = fx + 0;
+    force[1] = fy + 0;
+    force[2] = fz + 0;
+    torque[0] = pf * m[3]! - (cy * fz - cz * fy) + 0;
+    torque[1] = pf * m[4]! - (cz * fx - cx * fz) + 0;
+    torque[2] = pf * m[5]! - (cx * fy - cy * fx) + 0;
+    if (perSurface) {
+      surfaces[0] = force[0];
+      surfaces[1] = force[1];
+      surfaces[2] = force[2];
+      surfaces[3] = torque[0];
+      surfaces[4] = torque[1];
+      surfaces[5] = torque[2];
     }
     return out;
   }
@@ -287,7 +319,8 @@ export function evaluateSrp(
   return out;
 }
 
-// Scratch for the frame changes, allocated once.
+// Scratch for the frame changes and the mesh table's interpolation, allocated once.
+const meshScratch = new Float64Array(6);
 const sunScratch: Vec3 = [0, 0, 0];
 const vecScratch: Vec3 = [0, 0, 0];
 

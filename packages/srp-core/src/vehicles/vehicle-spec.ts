@@ -6,6 +6,7 @@
  * All vectors are in the body frame.
  */
 import type { ReadonlyVec3 } from '../math/vec3';
+import type { SrpCoefficientTable } from '../mesh/mesh-types';
 import type { SurfaceOpticsInput } from './plate-optics';
 import type { SailOpticsPresetName } from './sail-optics';
 
@@ -104,8 +105,19 @@ export interface SailSpec extends VehicleSpecBase {
   optics: SailOpticsInput;
 }
 
+/**
+ * A vehicle described by a triangle mesh, through its coefficient table (computed beforehand with
+ * self-shadowing, see mesh/coefficient-table.ts): SRP is interpolated from the table for the Sun
+ * direction in the body frame.
+ */
+export interface MeshTableSpec extends VehicleSpecBase {
+  kind: 'mesh';
+  /** The mesh's coefficient table (torques about the body-frame origin). */
+  table: SrpCoefficientTable;
+}
+
 /** Any vehicle, told apart by `kind`. */
-export type VehicleSpec = CannonballSpec | PlateVehicleSpec | SailSpec;
+export type VehicleSpec = CannonballSpec | PlateVehicleSpec | SailSpec | MeshTableSpec;
 
 /** The vehicle kinds. */
 export type VehicleKind = VehicleSpec['kind'];

@@ -116,11 +116,16 @@ function VehiclesSection({ missionId, canEdit }: { missionId: string; canEdit: b
       title="Vehicles"
       count={vehicles.data?.vehicles.length}
       action={
-        canEdit && (
-          <Link to={`/missions/${missionId}/vehicles/new`} className={buttonClasses('secondary', 'sm')}>
-            New vehicle
+        <div className="flex items-center gap-2">
+          <Link to={`/missions/${missionId}/meshes`} className={buttonClasses('secondary', 'sm')}>
+            Meshes
           </Link>
-        )
+          {canEdit && (
+            <Link to={`/missions/${missionId}/vehicles/new`} className={buttonClasses('secondary', 'sm')}>
+              New vehicle
+            </Link>
+          )}
+        </div>
       }
     >
       {vehicles.isPending ? (

@@ -1,4 +1,4 @@
-import type { ReactNode } from 'react';
+import { lazy, Suspense, useMemo, type ReactNode } from 'react';
 import { Link, useParams } from 'react-router-dom';
 import { runParamsSchema } from '@photon-ledger/shared';
 import { Button } from '../../components/ui/button';
@@ -15,11 +15,28 @@ import { useRunBudget } from '../../features/runs/api/get-run-budget';
 import { useRunSummary } from '../../features/runs/api/get-run-summary';
 import { runPagePath } from '../../features/runs/api/run-path';
 import { BudgetTable } from '../../features/runs/components/budget-table';
+import { useRunEvents } from '../../features/runs/api/get-run-events';
+import { ChartsPlaceholder } from '../../features/runs/components/charts/chart-frame';
+import { pairEclipses } from '../../features/runs/lib/eclipses';
+import { ReviewHistory } from '../../features/reviews/components/review-history';
 
-/** Print rules: no app chrome, no buttons, black on white, tables kept whole. */
+// uPlot stays out of the first bundle.
+const RunCharts = lazy(() => import('../../features/runs/components/charts/run-charts'));
+
+/**
+ * Print rules: no app chrome, no buttons, black on white, tables kept whole. The report is laid
+ * out at most 680 CSS px wide on screen too, so the chart canvases are drawn at the width of an A4
+ * page (210 mm less 2 × 14 mm margins ≈ 688 px) and print without scaling or clipping.
+ */
 const printCss = `
+.report-budget table { min-width: 0 !important; }
+.report-budget th, .report-budget td { padding-left: 6px !important; padding-right: 6px !important; }
 @media print {
-  @page { margin: 16mm 14mm; }
+  @page { size: A4; margin: 16mm 14mm; }
+  html { background: white !important; }
+  .report canvas { max-width: 100% !important; }
+  .report-charts fieldset { display: none !important; }
+  .report-charts figure { break-inside: avoid; }
   body { background: white !important; }
   body > div header, body > div footer, .no-print, [href="#main"] { display: none !important; }
   .report { display: flex !important; }
@@ -47,13 +64,15 @@ function Report({ missionId, runId }: { missionId: string; runId: string }) {
   const budget = useRunBudget(missionId, runId, { enabled: ready });
   const review = useReview(missionId, 'budget', runId);
   const comments = useComments(missionId, 'budget', runId);
+  const events = useRunEvents(missionId, runId, { enabled: ready });
+  const passages = useMemo(() => (events.data && summary.data ? pairEclipses(events.data.events, summary.data.spanSeconds) : []), [events.data, summary.data]);
 
   if (run.isError) return <ErrorState title="Could not load this run" error={run.error} onRetry={() => void run.refetch()} retrying={run.isFetching} />;
   if (!run.data) return <LoadingState label="Loading the report…" />;
   if (!ready) return <NotFound title="No budget yet" message="A review report needs a run that succeeded." />;
 
   return (
-    <article className="report flex flex-col gap-6">
+    <article className="report mx-auto flex w-full max-w-[680px] flex-col gap-6">
       <style>{printCss}</style>
       <title>{`Review report · ${run.data.scenarioName} · Photon Ledger`}</title>
       <div className="no-print flex flex-wrap items-center gap-3">
@@ -80,20 +99,24 @@ function Report({ missionId, runId }: { missionId: string; runId: string }) {
 
       <ReportSection title="Approval">
         {review.data ? (
-          <dl className="grid grid-cols-[max-content_1fr] gap-x-4 gap-y-1 text-sm">
-            <Term label="State">{reviewStateLabels[review.data.state]}</Term>
-            <Term label="Submitted">{review.data.submittedBy ? `${review.data.submittedBy.displayName}, ${when(review.data.submittedAt)}` : '—'}</Term>
-            <Term label={review.data.state === 'approved' ? 'Approved' : 'Decided'}>{review.data.decidedBy ? `${review.data.decidedBy.displayName}, ${when(review.data.decidedAt)}` : '—'}</Term>
-            {review.data.reason && <Term label="Reason">{review.data.reason}</Term>}
-            {review.data.frozen && (
-              <>
-                <Term label="Content SHA-256">
-                  <span className="font-mono text-xs break-all">{review.data.frozen.contentHash}</span>
-                </Term>
-                <Term label="Still matches">{review.data.intact === false ? 'NO — content changed after approval' : 'yes'}</Term>
-              </>
-            )}
-          </dl>
+          <>
+            <dl className="grid grid-cols-[max-content_1fr] gap-x-4 gap-y-1 text-sm">
+              <Term label="State">{reviewStateLabels[review.data.state]}</Term>
+              <Term label="Submitted">{review.data.submittedBy ? `${review.data.submittedBy.displayName}, ${when(review.data.submittedAt)}` : '—'}</Term>
+              <Term label={review.data.state === 'approved' ? 'Approved' : 'Decided'}>{review.data.decidedBy ? `${review.data.decidedBy.displayName}, ${when(review.data.decidedAt)}` : '—'}</Term>
+              {review.data.reason && <Term label="Reason">{review.data.reason}</Term>}
+              {review.data.frozen && (
+                <>
+                  <Term label="Content SHA-256">
+                    <span className="font-mono text-xs break-all">{review.data.frozen.contentHash}</span>
+                  </Term>
+                  <Term label="Still matches">{review.data.intact === false ? 'NO — content changed after approval' : 'yes'}</Term>
+                </>
+              )}
+            </dl>
+            <h3 className="mt-2 text-sm font-semibold">History</h3>
+            <ReviewHistory missionId={missionId} subjectType="budget" subjectId={runId} version={review.data.updatedAt} />
+          </>
         ) : review.isError ? (
           <p className="text-sm text-alarm">The review could not be loaded.</p>
         ) : (
@@ -121,7 +144,29 @@ function Report({ missionId, runId }: { missionId: string; runId: string }) {
       </ReportSection>
 
       <ReportSection title="Budget with margins">
-        {budget.data ? <BudgetTable budget={budget.data} /> : budget.isError ? <p className="text-sm text-alarm">The budget could not be loaded.</p> : <LoadingState label="Loading the budget…" />}
+        {budget.data ? (
+          <div className="report-budget">
+            <BudgetTable budget={budget.data} />
+          </div>
+        ) : budget.isError ? (
+          <p className="text-sm text-alarm">The budget could not be loaded.</p>
+        ) : (
+          <LoadingState label="Loading the budget…" />
+        )}
+      </ReportSection>
+
+      <ReportSection title="Charts">
+        {summary.isError ? (
+          <p className="text-sm text-alarm">The charts need the run summary, which could not be loaded.</p>
+        ) : summary.data && (budget.data || budget.isError) && (events.data || events.isError) ? (
+          <div className="report-charts">
+            <Suspense fallback={<ChartsPlaceholder withMomentum={Boolean(budget.data?.momentum)} />}>
+              <RunCharts missionId={missionId} runId={runId} summary={summary.data} eclipses={passages} withMomentum={Boolean(budget.data?.momentum)} />
+            </Suspense>
+          </div>
+        ) : (
+          <ChartsPlaceholder withMomentum />
+        )}
       </ReportSection>
 
       <ReportSection title="Comments">

@@ -1,6 +1,6 @@
 import { lazy, Suspense, useMemo, useState } from 'react';
-import { useParams } from 'react-router-dom';
-import { studyParamsSchema, type Study } from '@photon-ledger/shared';
+import { Link, useParams } from 'react-router-dom';
+import { studyParamsSchema, type Role, type Study } from '@photon-ledger/shared';
 import { Breadcrumbs } from '../../components/ui/breadcrumbs';
 import { Button, buttonClasses } from '../../components/ui/button';
 import { cautionText } from '../../components/ui/caution-footer';
@@ -21,6 +21,12 @@ import { StudyProgress, StudyStatusBadge } from '../../features/studies/componen
 import { StudyStatisticsTable } from '../../features/studies/components/study-statistics-table';
 import { lineLabel, lineUnit, pathUnit } from '../../features/studies/lib/study-format';
 import { ApiRequestError } from '../../lib/api-client';
+import { CommentThread } from '../../features/comments/components/comment-thread';
+import { ReviewPanel } from '../../features/reviews/components/review-panel';
+import { ReviewHistory } from '../../features/reviews/components/review-history';
+import { useReview } from '../../features/reviews/api/get-review';
+import { CaseDetail } from '../../features/studies/components/case-detail';
+import type { StudyCaseRow } from '../../features/studies/api/get-study-cases';
 
 // uPlot stays out of the first bundle.
 const StudyScatter = lazy(() => import('../../features/studies/components/study-scatter'));
@@ -64,7 +70,11 @@ function StudyPage({ missionId, studyId }: { missionId: string; studyId: string 
 
 function StudyBody({ missionId, study }: { missionId: string; study: Study }) {
   const me = useMe();
-  const canEdit = me.data?.role === 'engineer' || me.data?.role === 'lead';
+  const role = me.data?.role;
+  const canEdit = role === 'engineer' || role === 'lead';
+  const canComment = canEdit || role === 'reviewer';
+  const [openIndex, setOpenIndex] = useState<number | undefined>();
+  const [openSnapshot, setOpenSnapshot] = useState<StudyCaseRow | undefined>();
   const cancel = useCancelStudy(missionId, study.id);
   const active = isStudyActive(study);
   const refresh = active ? STUDY_POLL_MS * 2 : false;
@@ -98,6 +108,12 @@ function StudyBody({ missionId, study }: { missionId: string; study: Study }) {
     return out;
   }, [everyCase.data, xAxis, xIsLine, yLine, paretoIndices, bestIndex]);
 
+  // The open case: its freshest row (the table or every succeeded case), else the row clicked.
+  const openCase: StudyCaseRow | undefined =
+    openIndex === undefined
+      ? undefined
+      : (table.data?.cases.find((c) => c.index === openIndex) ?? everyCase.data?.cases.find((c) => c.index === openIndex) ?? openSnapshot);
+
   const csvQuery = new URLSearchParams(Object.entries(caseQueryParams(query)).filter((e): e is [string, string] => Boolean(e[1])));
   const xLabel = xIsLine ? `${lineLabel(xAxis.slice(5))} (${lineUnit(xAxis.slice(5))})` : `${xAxis.slice(6)} (${pathUnit(xAxis.slice(6))})`;
   const select = 'h-9 rounded-md border border-rule-strong bg-paper-raised px-2 text-sm';
@@ -109,6 +125,9 @@ function StudyBody({ missionId, study }: { missionId: string; study: Study }) {
           <h1 className="text-2xl font-semibold">{study.name}</h1>
           <StudyStatusBadge study={study} />
           <div className="ml-auto flex gap-2">
+            <Link to={`/missions/${missionId}/studies/${study.id}/report`} className={buttonClasses('secondary', 'sm')}>
+              Printable report
+            </Link>
             <a href={`${studyPath(missionId, study.id)}/export/cases.csv?${csvQuery.toString()}`} className={buttonClasses('secondary', 'sm')} download>
               Download CSV
             </a>
@@ -126,6 +145,8 @@ function StudyBody({ missionId, study }: { missionId: string; study: Study }) {
         <StudyProgress study={study} />
         {cancel.isError && <p className="text-sm text-alarm">{cancel.error.message}</p>}
       </header>
+
+      <StudyReview missionId={missionId} studyId={study.id} role={role} />
 
       <section aria-labelledby="stats-heading" className="flex flex-col gap-3">
         <h2 id="stats-heading" className="text-lg font-semibold">
@@ -249,10 +270,67 @@ function StudyBody({ missionId, study }: { missionId: string; study: Study }) {
             onQuery={setQuery}
             bestIndex={bestIndex}
             paretoIndices={paretoIndices}
+            openIndex={openIndex}
+            onOpen={(c) => {
+              setOpenIndex(c.index);
+              setOpenSnapshot(c);
+            }}
           />
         )}
+        {openCase && (
+          <CaseDetail
+            studyCase={openCase}
+            parameterPaths={study.parameterPaths}
+            lines={study.lines}
+            best={openCase.index === bestIndex}
+            pareto={paretoIndices.has(openCase.index)}
+            onClose={() => setOpenIndex(undefined)}
+          >
+            <CommentThread key={openCase.id} missionId={missionId} subjectType="case" subjectId={openCase.id} canComment={canComment} />
+          </CaseDetail>
+        )}
+      </section>
+
+      <section aria-labelledby="comments-heading" className="flex flex-col gap-3">
+        <h2 id="comments-heading" className="text-lg font-semibold">
+          Comments on the study
+        </h2>
+        <CommentThread
+          missionId={missionId}
+          subjectType="study"
+          subjectId={study.id}
+          canComment={canComment}
+          lines={study.lines.map((l) => ({ key: l, label: lineLabel(l) }))}
+          wholeLabel="The whole study"
+        />
       </section>
       <p className="rounded-md border border-rule bg-paper-sunk/60 p-3 text-xs text-ink-soft">{statistics.data?.caution ?? cautionText}</p>
     </>
+  );
+}
+
+/** The study's review (submit, approve, send back), its history, and the link to the printable report. */
+function StudyReview({ missionId, studyId, role }: { missionId: string; studyId: string; role: Role | undefined }) {
+  const review = useReview(missionId, 'study', studyId);
+  return (
+    <section aria-labelledby="review-heading" className="flex flex-col gap-3">
+      <div className="flex flex-wrap items-baseline gap-x-3">
+        <h2 id="review-heading" className="text-lg font-semibold">
+          Review
+        </h2>
+        <Link to={`/missions/${missionId}/studies/${studyId}/report`} className="text-sm underline decoration-rule-strong underline-offset-2 hover:text-sodium-deep">
+          Printable report
+        </Link>
+      </div>
+      <ReviewPanel missionId={missionId} subjectType="study" subjectId={studyId} role={role} />
+      {review.data && review.data.state !== 'draft' && (
+        <details className="text-sm">
+          <summary className="cursor-pointer text-ink-soft hover:text-ink">History of this review</summary>
+          <div className="mt-2">
+            <ReviewHistory missionId={missionId} subjectType="study" subjectId={studyId} version={review.data.updatedAt} />
+          </div>
+        </details>
+      )}
+    </section>
   );
 }

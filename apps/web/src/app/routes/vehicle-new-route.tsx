@@ -7,13 +7,18 @@ import { NotFound } from '../../components/ui/not-found';
 import { useMe } from '../../features/auth/api/get-me';
 import { useMission } from '../../features/missions/api/get-mission';
 import { LoadingState } from '../../components/ui/loading-state';
+import { useMeshes } from '../../features/meshes/api/list-meshes';
+import { meshesPagePath } from '../../features/meshes/api/mesh-paths';
+
+// The lit 3D view of a chosen mesh (three, r3f, srp-core's ray caster), loaded when a mesh is chosen.
+const MeshView = lazy(() => import('../../features/meshes/components/mesh-view'));
 
 // The editor brings srp-core (for the live preview): loaded with the page, not with the app.
 const NewVehicleEditor = lazy(() =>
   import('../../features/vehicles/components/vehicle-editor-containers').then((m) => ({ default: m.NewVehicleEditor })),
 );
 
-/** `/missions/:missionId/vehicles/new — a new vehicle (plates, cannonball or sail) with its live 3D preview. */
+/** `/missions/:missionId/vehicles/new — a new vehicle (plates, cannonball, sail or mesh) with its live 3D preview. */
 export function VehicleNewRoute() {
   const parsed = missionParamsSchema.safeParse(useParams());
   if (!parsed.success) {
@@ -29,6 +34,7 @@ function VehicleNewPage({ missionId }: { missionId: string }) {
   const role = me.data?.role;
   const canEdit = role === 'engineer' || role === 'lead';
   const missionName = mission.data?.name ?? 'Mission';
+  const meshes = useMeshes(missionId);
 
   return (
     <div className="flex flex-col gap-5">
@@ -46,6 +52,14 @@ function VehicleNewPage({ missionId }: { missionId: string }) {
           <NewVehicleEditor
             missionId={missionId}
             onCreated={(vehicleId) => void navigate(`/missions/${missionId}/vehicles/${vehicleId}`)}
+            mesh={{
+              meshChoices: { meshes: meshes.data?.meshes, error: meshes.isError ? meshes.error.message : null, meshesPath: meshesPagePath(missionId) },
+              renderMeshPreview: (meshId, view) => (
+                <Suspense fallback={<LoadingState label="Loading the 3D view…" className="h-[22rem] items-start" />}>
+                  <MeshView key={meshId} missionId={missionId} meshId={meshId} optics={view.optics} samplesPerFacet={view.samplesPerFacet} heightClass="h-[22rem]" />
+                </Suspense>
+              ),
+            }}
           />
         </Suspense>
       ) : (

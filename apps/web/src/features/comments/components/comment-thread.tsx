@@ -25,12 +25,15 @@ export function CommentThread({
   subjectId,
   canComment,
   lines = [],
+  wholeLabel = 'The whole budget',
 }: {
   missionId: string;
   subjectType: CommentSubjectType;
   subjectId: string;
   canComment: boolean;
   lines?: readonly CommentLineChoice[];
+  /** The "About" choice for a comment on the subject as a whole (when lines are offered). */
+  wholeLabel?: string;
 }) {
   const comments = useComments(missionId, subjectType, subjectId);
   if (comments.isError) return <ErrorState title="Could not load the comments" error={comments.error} onRetry={() => void comments.refetch()} retrying={comments.isFetching} />;
@@ -55,7 +58,7 @@ export function CommentThread({
           ))}
         </ol>
       )}
-      {canComment && <Composer missionId={missionId} subjectType={subjectType} subjectId={subjectId} lines={lines} />}
+      {canComment && <Composer missionId={missionId} subjectType={subjectType} subjectId={subjectId} lines={lines} wholeLabel={wholeLabel} />}
     </div>
   );
 }
@@ -101,6 +104,7 @@ function Composer({
   subjectType,
   subjectId,
   lines = [],
+  wholeLabel = 'The whole budget',
   parent,
   onDone,
 }: {
@@ -108,6 +112,7 @@ function Composer({
   subjectType: CommentSubjectType;
   subjectId: string;
   lines?: readonly CommentLineChoice[];
+  wholeLabel?: string;
   parent?: Comment;
   onDone?: () => void;
 }) {
@@ -144,7 +149,7 @@ function Composer({
             About
           </label>
           <select id={`${id}-line`} value={lineKey} onChange={(e) => setLineKey(e.target.value)} className="h-9 max-w-sm rounded-md border border-rule-strong bg-paper-raised px-2 text-sm">
-            <option value="">The whole budget</option>
+            <option value="">{wholeLabel}</option>
             {lines.map((l) => (
               <option key={l.key} value={l.key}>
                 {l.label}

@@ -1,5 +1,5 @@
 import { keepPreviousData, queryOptions, useQuery } from '@tanstack/react-query';
-import { studyCasePageSchema, type StudyCasePage, type StudyCaseStatus } from '@photon-ledger/shared';
+import { studyCasePageSchema, type StudyCase, type StudyCasePage, type StudyCaseStatus } from '@photon-ledger/shared';
 import { apiRequest } from '../../../lib/api-client';
 import { studyKeyPrefix } from './list-studies';
 import { studyPath } from './study-path';
@@ -25,9 +25,14 @@ export const caseQueryParams = (q: CaseTableQuery): Record<string, string | unde
   ...(q.limit ? { limit: String(q.limit) } : {}),
 });
 
+/** A case row; its id is the subject of comments on the case (subjectType 'case'). */
+export type StudyCaseRow = StudyCase;
+const casePageSchema = studyCasePageSchema;
+export type StudyCaseRowPage = StudyCasePage;
+
 /** `GET .../studies/:studyId/cases`: sorted and filtered case table. */
-export function getStudyCases(missionId: string, studyId: string, q: CaseTableQuery, signal?: AbortSignal): Promise<StudyCasePage> {
-  return apiRequest(`${studyPath(missionId, studyId)}/cases`, studyCasePageSchema, { signal, query: caseQueryParams(q) });
+export function getStudyCases(missionId: string, studyId: string, q: CaseTableQuery, signal?: AbortSignal): Promise<StudyCaseRowPage> {
+  return apiRequest(`${studyPath(missionId, studyId)}/cases`, casePageSchema, { signal, query: caseQueryParams(q) });
 }
 
 export function studyCasesQueryOptions(missionId: string, studyId: string, q: CaseTableQuery, refreshMs: number | false) {

@@ -13,6 +13,8 @@ export function CaseTable({
   onQuery,
   bestIndex,
   paretoIndices,
+  openIndex,
+  onOpen,
 }: {
   cases: readonly StudyCase[];
   total: number;
@@ -22,6 +24,10 @@ export function CaseTable({
   onQuery: (q: CaseTableQuery) => void;
   bestIndex: number | undefined;
   paretoIndices: ReadonlySet<number>;
+  /** The case shown in the detail panel, if any. */
+  openIndex?: number | undefined;
+  /** Opens a case's detail (parameters, lines, comments); no row action without it. */
+  onOpen?: ((c: StudyCase) => void) | undefined;
 }) {
   const id = useId();
   const header = (key: string, label: string, unit: string) => {
@@ -89,11 +95,16 @@ export function CaseTable({
               </th>
               {parameterPaths.map((p) => header(`param:${p}`, p.replace(/^vehicle\.|^scenario\./, ''), pathUnit(p)))}
               {lines.map((l) => header(`line:${l}`, l, lineUnit(l)))}
+              {onOpen && (
+                <th scope="col" className="py-1 pr-2 pl-3 text-right font-medium">
+                  <span className="sr-only">Details</span>
+                </th>
+              )}
             </tr>
           </thead>
           <tbody className="font-mono">
             {cases.map((c) => (
-              <tr key={c.index} className={c.index === bestIndex ? 'border-t border-rule bg-sodium/15' : 'border-t border-rule'}>
+              <tr key={c.index} className={`border-t border-rule ${c.index === bestIndex ? 'bg-sodium/15' : ''} ${c.index === openIndex ? 'outline-2 -outline-offset-2 outline-ink' : ''}`}>
                 <td className="py-1.5 pr-2 text-right">
                   {c.index}
                   {c.index === bestIndex && <span className="ml-1 font-sans text-xs">(best)</span>}
@@ -112,6 +123,19 @@ export function CaseTable({
                     {formatValue(c.lines?.[l])}
                   </td>
                 ))}
+                {onOpen && (
+                  <td className="py-1 pr-2 pl-3 text-right font-sans">
+                    <button
+                      type="button"
+                      onClick={() => onOpen(c)}
+                      aria-pressed={c.index === openIndex}
+                      aria-label={`Open case ${c.index}`}
+                      className="rounded px-2 py-0.5 text-xs underline decoration-rule-strong underline-offset-2 hover:bg-paper-sunk focus-visible:outline-2 focus-visible:outline-sodium"
+                    >
+                      Open
+                    </button>
+                  </td>
+                )}
               </tr>
             ))}
           </tbody>

@@ -18,7 +18,20 @@ const tickFont = '11px "JetBrains Mono Variable", "JetBrains Mono", ui-monospace
 const labelFont = '500 12px "IBM Plex Sans Variable", "IBM Plex Sans", ui-sans-serif, sans-serif';
 
 /** Cases as points (x ascending), Pareto cases as larger marks, the best case ringed. */
-export default function StudyScatter({ points, xLabel, yLabel, ariaLabel }: { points: readonly ScatterPoint[]; xLabel: string; yLabel: string; ariaLabel: string }) {
+export default function StudyScatter({
+  points,
+  xLabel,
+  yLabel,
+  ariaLabel,
+  staticLegend = false,
+}: {
+  points: readonly ScatterPoint[];
+  xLabel: string;
+  yLabel: string;
+  ariaLabel: string;
+  /** A legend of names only (no read-out under the cursor): for printed reports. */
+  staticLegend?: boolean;
+}) {
   const hostRef = useRef<HTMLDivElement>(null);
   useEffect(() => {
     const host = hostRef.current;
@@ -46,6 +59,7 @@ export default function StudyScatter({ points, xLabel, yLabel, ariaLabel }: { po
           },
         },
         cursor: { drag: { x: false, y: false } },
+        legend: { live: !staticLegend },
         axes: [
           { label: xLabel, stroke: axisStroke, font: tickFont, labelFont, labelSize: 22, grid: { stroke: gridStroke }, values: (_u, s) => s.map((v) => formatValue(v)) },
           { label: yLabel, stroke: axisStroke, font: tickFont, labelFont, labelSize: 22, size: 70, grid: { stroke: gridStroke }, values: (_u, s) => s.map((v) => formatValue(v)) },
@@ -66,6 +80,6 @@ export default function StudyScatter({ points, xLabel, yLabel, ariaLabel }: { po
       observer.disconnect();
       plot.destroy();
     };
-  }, [points, xLabel, yLabel]);
+  }, [points, xLabel, yLabel, staticLegend]);
   return <div ref={hostRef} role="img" aria-label={ariaLabel} className="min-h-[340px] w-full" />;
 }

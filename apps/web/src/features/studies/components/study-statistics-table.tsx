@@ -10,12 +10,12 @@ export function StudyStatisticsTable({ statistics }: { statistics: StudyStatisti
           <thead className="text-xs text-ink-soft">
             <tr>
               <th className="py-1 font-medium">Line</th>
-              <th className="py-1 text-right font-medium">Cases</th>
-              <th className="py-1 text-right font-medium">Mean</th>
-              <th className="py-1 text-right font-medium">SD</th>
-              <th className="py-1 text-right font-medium">95th pct</th>
-              <th className="py-1 text-right font-medium">99th pct</th>
-              <th className="py-1 text-right font-medium">Min – max</th>
+              <th className="py-1 pl-3 text-right font-medium">Cases</th>
+              <th className="py-1 pl-3 text-right font-medium">Mean</th>
+              <th className="py-1 pl-3 text-right font-medium">SD</th>
+              <th className="py-1 pl-3 text-right font-medium">95th pct</th>
+              <th className="py-1 pl-3 text-right font-medium">99th pct</th>
+              <th className="py-1 pl-3 text-right font-medium">Min – max</th>
             </tr>
           </thead>
           <tbody className="font-mono">
@@ -24,12 +24,12 @@ export function StudyStatisticsTable({ statistics }: { statistics: StudyStatisti
                 <td className="py-2 font-sans">
                   {lineLabel(l.line)} <span className="text-xs text-ink-soft">({lineUnit(l.line)})</span>
                 </td>
-                <td className="py-2 text-right">{l.count}</td>
-                <td className="py-2 text-right">{formatValue(l.mean)}</td>
-                <td className="py-2 text-right">{formatValue(l.sd)}</td>
-                <td className="py-2 text-right">{formatValue(l.p95)}</td>
-                <td className="py-2 text-right">{formatValue(l.p99)}</td>
-                <td className="py-2 text-right">
+                <td className="py-2 pl-3 text-right whitespace-nowrap">{l.count}</td>
+                <td className="py-2 pl-3 text-right whitespace-nowrap">{formatValue(l.mean)}</td>
+                <td className="py-2 pl-3 text-right whitespace-nowrap">{formatValue(l.sd)}</td>
+                <td className="py-2 pl-3 text-right whitespace-nowrap">{formatValue(l.p95)}</td>
+                <td className="py-2 pl-3 text-right whitespace-nowrap">{formatValue(l.p99)}</td>
+                <td className="py-2 pl-3 text-right whitespace-nowrap">
                   {formatValue(l.min)} – {formatValue(l.max)}
                 </td>
               </tr>

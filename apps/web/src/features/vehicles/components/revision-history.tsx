@@ -17,7 +17,7 @@ export interface RevisionHistoryProps {
   onPick: (which: 'from' | 'to', revision: number) => void;
 }
 
-const kindLabels = { plates: 'Plates', cannonball: 'Cannonball', sail: 'Sail' } as const;
+const kindLabels = { plates: 'Plates', cannonball: 'Cannonball', sail: 'Sail', mesh: 'Mesh' } as const;
 
 /** The revisions of a vehicle, newest first, with a "from" and a "to" choice on each row for comparing. */
 export function RevisionHistory({ revisions, from, to, onPick }: RevisionHistoryProps) {

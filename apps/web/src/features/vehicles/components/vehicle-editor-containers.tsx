@@ -7,7 +7,10 @@ import { useCreateVehicleRevision } from '../api/create-vehicle-revision';
 import { useUploadPlateSet } from '../api/upload-plate-set';
 import type { SunAngles } from '../lib/srp-preview';
 import { draftFromSpec, emptyDraft } from '../lib/vehicle-draft';
-import { VehicleEditor } from './vehicle-editor';
+import { VehicleEditor, type VehicleEditorProps } from './vehicle-editor';
+
+/** What the mesh kind needs from the route: the mission's meshes and the view of a chosen mesh. */
+export type MeshSupport = Pick<VehicleEditorProps, 'meshChoices' | 'renderMeshPreview'>;
 
 /** Where the Sun starts: lighting three faces of a box at once. */
 export const DEFAULT_SUN: SunAngles = { azimuthDeg: 35, elevationDeg: 25 };
@@ -17,10 +20,11 @@ export interface NewVehicleEditorProps {
   missionId: string;
   /** Called with the new vehicle's id once it is created (by saving or by importing a CSV). */
   onCreated: (vehicleId: string) => void;
+  mesh?: MeshSupport;
 }
 
 /** The editor on an empty vehicle; "Create vehicle" makes its revision 1. */
-export function NewVehicleEditor({ missionId, onCreated }: NewVehicleEditorProps) {
+export function NewVehicleEditor({ missionId, onCreated, mesh }: NewVehicleEditorProps) {
   const [initialDraft] = useState(emptyDraft);
   const [sun, setSun] = useState(DEFAULT_SUN);
   const create = useCreateVehicle(missionId);
@@ -30,6 +34,7 @@ export function NewVehicleEditor({ missionId, onCreated }: NewVehicleEditorProps
       initialDraft={initialDraft}
       isNew
       readOnly={false}
+      {...mesh}
       sun={sun}
       onSunChange={setSun}
       saving={create.isPending}
@@ -59,6 +64,7 @@ export interface ExistingVehicleEditorProps {
   readOnly: boolean;
   /** Fetches the vehicle again and answers the fresh copy (after a conflict). */
   onReload: () => Promise<VehicleDetail | undefined>;
+  mesh?: MeshSupport;
 }
 
 /**
@@ -66,7 +72,7 @@ export interface ExistingVehicleEditorProps {
  * edit started from is kept here and moves only when the user saves, imports or reloads, so a
  * background refetch never throws edits away: it shows that a newer revision exists instead.
  */
-export function ExistingVehicleEditor({ missionId, vehicle, readOnly, onReload }: ExistingVehicleEditorProps) {
+export function ExistingVehicleEditor({ missionId, vehicle, readOnly, onReload, mesh }: ExistingVehicleEditorProps) {
   const [base, setBase] = useState({ revision: vehicle.revision, spec: vehicle.latestSpec });
   const [sun, setSun] = useState(DEFAULT_SUN);
   const [notice, setNotice] = useState<string | null>(null);
@@ -120,6 +126,7 @@ export function ExistingVehicleEditor({ missionId, vehicle, readOnly, onReload }
       initialDraft={initialDraft}
       isNew={false}
       readOnly={readOnly}
+      {...mesh}
       sun={sun}
       onSunChange={setSun}
       saving={save.isPending}

@@ -12,9 +12,16 @@ import { previewOf, type SunAngles } from '../lib/srp-preview';
 import { draftToSpec, parseNumber, type PlateDraft, type SailOpticsDraft, type Vec3Draft, type VehicleDraft, type VehicleKind } from '../lib/vehicle-draft';
 import { visibleErrors } from '../lib/visible-errors';
 import { Field, VectorField } from './fields';
+import { MeshFields, type MeshChoices } from './mesh-fields';
 import { PlateCsvImport } from './plate-csv-import';
 import { PlateTable } from './plate-table';
 import { VehiclePreview } from './vehicle-preview';
+
+/** What the mesh view of the editor is given besides the mesh: the draft's optics and samples when valid. */
+export interface MeshPreviewView {
+  optics: Extract<VehicleSpec, { kind: 'mesh' }>['optics'] | undefined;
+  samplesPerFacet: number;
+}
 
 /** What the user asked to save. */
 export interface SaveRequest {
@@ -51,18 +58,33 @@ export interface VehicleEditorProps {
   importPending?: boolean;
   importError?: unknown;
   importNotice?: string | null;
+  /** The mission's meshes, for the mesh kind (loaded by the route). */
+  meshChoices?: MeshChoices | undefined;
+  /**
+   * The view of a chosen mesh, shown instead of the plate preview for the mesh kind (the route
+   * supplies it); `view` carries the draft's optics and samples once they are valid.
+   */
+  renderMeshPreview?: ((meshId: string, view: MeshPreviewView) => ReactNode) | undefined;
 }
 
-const kindLabels: Record<VehicleKind, string> = { plates: 'Plates', cannonball: 'Cannonball', sail: 'Sail' };
+const kindLabels: Record<VehicleKind, string> = { plates: 'Plates', cannonball: 'Cannonball', sail: 'Sail', mesh: 'Mesh' };
 const kindHints: Record<VehicleKind, string> = {
   plates: 'Flat plates with their own optics; force and torque per plate.',
   cannonball: 'A sphere: force P·Cr·A along the light, no torque.',
   sail: 'One flat membrane with sail optics (McInnes).',
+  mesh: 'An imported triangle mesh with self-shadowing; SRP from a coefficient table over Sun directions.',
 };
 
 /** Paths that have a place in the form; messages on any other path go to the list by the save button. */
 function isKnownPath(kind: VehicleKind) {
-  const own = kind === 'plates' ? ['plates'] : kind === 'cannonball' ? ['areaM2', 'cr'] : ['areaM2', 'normal', 'centroidM', 'optics'];
+  const own =
+    kind === 'plates'
+      ? ['plates']
+      : kind === 'cannonball'
+        ? ['areaM2', 'cr']
+        : kind === 'mesh'
+          ? ['meshId', 'optics', 'table']
+          : ['areaM2', 'normal', 'centroidM', 'optics'];
   const known = ['name', 'description', 'massKg', 'centreOfMassM', 'note', 'basedOnRevision', ...own];
   return (path: string) => known.some((k) => path === k || path.startsWith(`${k}.`));
 }
@@ -247,19 +269,41 @@ export function VehicleEditor(props: VehicleEditorProps) {
             <CannonballFields draft={draft} errors={errors} readOnly={readOnly} edit={edit} visit={visit} />
           )}
           {draft.kind === 'sail' && <SailFields draft={draft} errors={errors} readOnly={readOnly} edit={edit} visit={visit} />}
+          {draft.kind === 'mesh' && (
+            <MeshFields
+              mesh={draft.mesh}
+              choices={props.meshChoices}
+              errors={errors}
+              readOnly={readOnly}
+              onChange={(key, update) => edit(`mesh.${key}`, (d) => ({ ...d, mesh: update(d.mesh) }))}
+              onVisit={visit}
+            />
+          )}
           <DescriptionField
             value={draft.description}
             readOnly={readOnly}
             error={errors.description}
             onChange={(v) => edit('description', (d) => ({ ...d, description: v }))}
           />
-          <VehicleSummary draft={draft} />
+          <VehicleSummary draft={draft} meshChoices={props.meshChoices} />
         </section>
 
         <section aria-labelledby="preview-heading" className="flex flex-col gap-2 lg:sticky lg:top-4">
           <h2 id="preview-heading" className="text-lg font-semibold">
-            Live preview
+            {draft.kind === 'mesh' ? 'Mesh view' : 'Live preview'}
           </h2>
+          {draft.kind === 'mesh' ? (
+            draft.mesh.meshId !== '' && props.renderMeshPreview ? (
+              props.renderMeshPreview(draft.mesh.meshId, {
+                optics: parsed.success && parsed.data.kind === 'mesh' ? parsed.data.optics : undefined,
+                samplesPerFacet: draft.mesh.samplesPerFacet,
+              })
+            ) : (
+              <p className="flex h-[22rem] items-center justify-center rounded-lg border border-dashed border-rule-strong px-4 text-sm text-ink-soft">
+                Choose a mesh to see it lit by the Sun.
+              </p>
+            )
+          ) : (
           <VehiclePreview
             preview={preview}
             sun={sun}
@@ -272,6 +316,7 @@ export function VehicleEditor(props: VehicleEditorProps) {
             onHoverPlate={setHoveredPlate}
             highlighted={hoveredPlate}
           />
+          )}
         </section>
       </div>
 
@@ -570,26 +615,30 @@ function DescriptionField({
 }
 
 /** Surfaces, total area and area-to-mass ratio of the draft (from what is valid so far). */
-function VehicleSummary({ draft }: { draft: VehicleDraft }) {
+function VehicleSummary({ draft, meshChoices }: { draft: VehicleDraft; meshChoices: MeshChoices | undefined }) {
+  const mesh = draft.kind === 'mesh' ? meshChoices?.meshes?.find((m) => m.id === draft.mesh.meshId) : undefined;
   const areas =
     draft.kind === 'plates'
       ? draft.plates.map((p) => parseNumber(p.areaM2))
-      : [parseNumber(draft.kind === 'cannonball' ? draft.cannonball.areaM2 : draft.sail.areaM2)];
-  const total = areas.reduce((sum, a) => sum + (a > 0 ? a : 0), 0);
+      : draft.kind === 'mesh'
+        ? []
+        : [parseNumber(draft.kind === 'cannonball' ? draft.cannonball.areaM2 : draft.sail.areaM2)];
+  const total = draft.kind === 'mesh' ? (mesh?.totalAreaM2 ?? Number.NaN) : areas.reduce((sum, a) => sum + (a > 0 ? a : 0), 0);
+  const surfaces = draft.kind === 'mesh' ? (mesh ? `${mesh.triangleCount.toLocaleString('en-GB')} facets` : '—') : String(areas.length);
   const mass = parseNumber(draft.massKg);
   return (
     <dl className="grid grid-cols-3 gap-2 rounded-lg border border-rule bg-paper-raised px-3 py-2 text-sm">
       <div>
         <dt className="text-xs text-ink-soft">Surfaces</dt>
-        <dd className="font-mono">{areas.length}</dd>
+        <dd className="font-mono">{surfaces}</dd>
       </div>
       <div>
         <dt className="text-xs text-ink-soft">Total area</dt>
-        <dd className="font-mono">{formatNumber(total, 4)} m²</dd>
+        <dd className="font-mono">{Number.isFinite(total) ? `${formatNumber(total, 4)} m²` : '—'}</dd>
       </div>
       <div>
         <dt className="text-xs text-ink-soft">Area / mass</dt>
-        <dd className="font-mono">{mass > 0 ? `${formatNumber(total / mass, 3)} m²/kg` : '—'}</dd>
+        <dd className="font-mono">{mass > 0 && Number.isFinite(total) ? `${formatNumber(total / mass, 3)} m²/kg` : '—'}</dd>
       </div>
     </dl>
   );

@@ -13,6 +13,7 @@ const kindLabels: Record<VehicleListItem['kind'], string> = {
   cannonball: 'Cannonball',
   plates: 'Plates',
   sail: 'Sail',
+  mesh: 'Mesh',
 };
 
 /** The mission's vehicles as a compact table, each name a link to its editor; an empty state without any. */

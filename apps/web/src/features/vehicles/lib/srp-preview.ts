@@ -180,7 +180,7 @@ export function evaluatePreview(
         forceN,
         torqueNm,
       });
-    } else {
+    } else if (spec.kind === 'cannonball') {
       surfaces.push({
         name: spec.name,
         plateIndex: null,
@@ -212,6 +212,8 @@ export function evaluatePreview(
 
 /** The preview of a draft's candidate spec, or null when nothing is drawable yet. */
 export function previewOf(candidate: Record<string, unknown>, sun: SunAngles): SrpPreview | null {
+  // A mesh vehicle needs its coefficient table (computed by the API): its view is the mesh's own.
+  if (candidate.kind === 'mesh') return null;
   const drawable = previewableSpec(candidate);
   if (!drawable) return null;
   try {

@@ -1,5 +1,7 @@
 import {
   materialPresetKeys,
+  meshSamplesPerFacet,
+  meshTableStepsDeg,
   sailOpticsPresetKeys,
   vehicleKinds,
   type VehicleSpec,
@@ -67,6 +69,27 @@ export interface SailOpticsDraft {
   nonLambertianBack: string;
 }
 
+/** The optics of one group of mesh facets as typed: the front always, the back for a thin sheet (mode 'none': no back). */
+export interface MeshGroupOpticsDraft {
+  front: FaceDraft;
+  back: FaceDraft;
+}
+
+/** A mesh vehicle as chosen: the mesh, its optics (default and per group) and the table settings. */
+export interface MeshDraft {
+  /** Id of an imported mesh of the mission; '' until one is chosen. */
+  meshId: string;
+  /** Optics of every group not listed in `groups`. */
+  defaultOptics: MeshGroupOpticsDraft;
+  /** Groups with optics of their own, by group name. */
+  groups: Readonly<Record<string, MeshGroupOpticsDraft>>;
+  /** Table grid step (°), one of meshTableStepsDeg. */
+  stepDeg: number;
+  /** Shadow samples per facet, one of meshSamplesPerFacet. */
+  samplesPerFacet: number;
+  specularBounce: boolean;
+}
+
 /** The whole vehicle as typed. */
 export interface VehicleDraft {
   kind: VehicleKind;
@@ -77,6 +100,16 @@ export interface VehicleDraft {
   plates: PlateDraft[];
   cannonball: { areaM2: string; cr: string };
   sail: { areaM2: string; normal: Vec3Draft; centroidM: Vec3Draft; optics: SailOpticsDraft };
+  mesh: MeshDraft;
+}
+
+/** Default table settings of a new mesh vehicle (the schema's defaults). */
+export const DEFAULT_MESH_STEP_DEG: (typeof meshTableStepsDeg)[number] = 5;
+export const DEFAULT_MESH_SAMPLES: (typeof meshSamplesPerFacet)[number] = 4;
+
+/** Mesh optics as a new vehicle starts them: MLI on the front, no back. */
+export function emptyMeshGroupOptics(): MeshGroupOpticsDraft {
+  return { front: emptyFace('preset', 'mli-kapton'), back: emptyFace('none', 'mli-kapton') };
 }
 
 let plateCounter = 0;
@@ -116,6 +149,14 @@ export function emptyDraft(): VehicleDraft {
     plates: [],
     cannonball: { areaM2: '', cr: '1.3' },
     sail: { areaM2: '', normal: ['0', '0', '1'], centroidM: ['0', '0', '0'], optics: { ...defaultSailOptics } },
+    mesh: {
+      meshId: '',
+      defaultOptics: emptyMeshGroupOptics(),
+      groups: {},
+      stepDeg: DEFAULT_MESH_STEP_DEG,
+      samplesPerFacet: DEFAULT_MESH_SAMPLES,
+      specularBounce: false,
+    },
   };
 }
 
@@ -222,6 +263,19 @@ export function draftFromSpec(spec: VehicleSpec): VehicleDraft {
               nonLambertianBack: text(optics.nonLambertianBack),
             },
     };
+  } else if (spec.kind === 'mesh') {
+    const groupOptics = (g: { front: FaceSpec; back?: FaceSpec | undefined }): MeshGroupOpticsDraft => ({
+      front: faceFromSpec(g.front, 'front'),
+      back: faceFromSpec(g.back, 'back'),
+    });
+    draft.mesh = {
+      meshId: spec.meshId,
+      defaultOptics: groupOptics(spec.optics.default),
+      groups: Object.fromEntries(Object.entries(spec.optics.groups ?? {}).map(([name, g]) => [name, groupOptics(g)])),
+      stepDeg: spec.table.stepDeg,
+      samplesPerFacet: spec.table.samplesPerFacet,
+      specularBounce: spec.table.specularBounce,
+    };
   } else {
     draft.plates = spec.plates.map((p) => ({
       id: newPlateId(),
@@ -316,5 +370,26 @@ export function draftToSpec(draft: VehicleDraft): Record<string, unknown> {
       optics,
     };
   }
+  if (draft.kind === 'mesh') return { ...base, ...meshToSpec(draft.mesh) };
   return { ...base, plates: draft.plates.map(plateToSpec) };
+}
+
+function meshGroupToSpec(g: MeshGroupOpticsDraft): Record<string, unknown> {
+  // The front always has optics: a 'none' front (never offered) is sent as its preset.
+  const front = g.front.mode === 'none' ? g.front.preset : faceToSpec(g.front);
+  const back = faceToSpec(g.back);
+  return back === undefined ? { front } : { front, back };
+}
+
+/** The mesh-kind fields of a candidate vehicle file. */
+export function meshToSpec(mesh: MeshDraft): Record<string, unknown> {
+  const groups = Object.entries(mesh.groups);
+  return {
+    meshId: mesh.meshId,
+    optics: {
+      default: meshGroupToSpec(mesh.defaultOptics),
+      ...(groups.length > 0 ? { groups: Object.fromEntries(groups.map(([name, g]) => [name, meshGroupToSpec(g)])) } : {}),
+    },
+    table: { stepDeg: mesh.stepDeg, samplesPerFacet: mesh.samplesPerFacet, specularBounce: mesh.specularBounce },
+  };
 }
