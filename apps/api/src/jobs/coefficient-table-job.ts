@@ -8,7 +8,6 @@
  * assembles the values with srp-core's assembleCoefficientTable and marks the table succeeded.
  * A chunk whose worker died is queued again once by the reaper (reapStaleTableChunks).
  */
-import { Worker } from 'node:worker_threads';
 import type PgBoss from 'pg-boss';
 import { QueryTypes, type Sequelize, type Transaction } from 'sequelize';
 import { assembleCoefficientTable, computeCoefficientTableRows, createMeshScene, type MeshOpticsInput, type MeshScene, type TriangleMesh } from '@photon-ledger/srp-core';
@@ -17,10 +16,10 @@ import { audit } from '../models';
 import { decodeFloat64, encodeFloat64, TABLE_CHUNK_QUEUE, type ResolvedMeshOptics } from '../services/coefficient-table-service';
 import { loadTriangleMesh } from '../services/mesh-service';
 import type { StoredTableSettings } from '../models';
-import { heartbeatIntervalMs } from './propagation-job';
+import { failureMessage, LeasedSlot } from './leased-slot';
 import { sendJob } from './queue';
-import type { TableThreadMessage, TableThreadRequest, TableThreadStart } from './coefficient-table-thread-protocol';
-import type { JobContext, JobSlot } from './index';
+import type { TableBandInput, TableBandResult } from './coefficient-table-thread-protocol';
+import type { JobContext } from './index';
 
 /** Claims of one chunk before the reaper gives up on it (the first claim and one retry). */
 export const CHUNK_MAX_ATTEMPTS = 2;
@@ -269,96 +268,6 @@ export async function computeTableHere(sequelize: Sequelize, tableId: string, wo
 }
 
 // ---------------------------------------------------------------------------------------------
-// The computation thread
-
-type BandResult =
-  | { kind: 'succeeded'; values: Float64Array; rays: number; computeMs: number }
-  | { kind: 'cancelled' }
-  | { kind: 'failed'; message: string }
-  | { kind: 'aborted' };
-
-interface BandComputation {
-  done: Promise<BandResult>;
-  requestCancel(): void;
-  abort(): Promise<void>;
-}
-
-const bootUrl = new URL('./run-thread-boot.mjs', import.meta.url);
-const entryUrl = new URL('./coefficient-table-thread.ts', import.meta.url).href;
-
-/** A slot's table thread, kept between bands (one at a time). */
-class TableThread {
-  private worker: Worker | null = null;
-  private readonly cancelFlag = new SharedArrayBuffer(Int32Array.BYTES_PER_ELEMENT);
-  private readonly cancel = new Int32Array(this.cancelFlag);
-  private inHand: { token: number; onProgress: (rowsDone: number) => void; finish: (r: BandResult) => void } | null = null;
-  private aborting = false;
-  private nextToken = 1;
-
-  compute(request: Omit<TableThreadRequest, 'token'>, onProgress: (rowsDone: number) => void): BandComputation {
-    if (this.inHand) throw new Error('a table thread takes one band at a time');
-    const worker = this.thread();
-    const token = this.nextToken++;
-    Atomics.store(this.cancel, 0, 0);
-    const done = new Promise<BandResult>((resolve) => {
-      this.inHand = {
-        token,
-        onProgress,
-        finish: (result) => {
-          if (this.inHand?.token !== token) return;
-          this.inHand = null;
-          this.worker?.unref();
-          resolve(result);
-        },
-      };
-    });
-    worker.ref();
-    worker.postMessage({ ...request, token } satisfies TableThreadRequest);
-    return {
-      done,
-      requestCancel: () => {
-        if (this.inHand?.token === token) Atomics.store(this.cancel, 0, 1);
-      },
-      abort: async () => {
-        if (this.inHand?.token !== token || !this.worker) return;
-        this.aborting = true;
-        await this.worker.terminate();
-      },
-    };
-  }
-
-  async close(): Promise<void> {
-    if (!this.worker) return;
-    this.aborting = true;
-    await this.worker.terminate();
-  }
-
-  private thread(): Worker {
-    if (this.worker) return this.worker;
-    const start: TableThreadStart = { entry: entryUrl, cancelFlag: this.cancelFlag };
-    const worker = new Worker(bootUrl, { workerData: start });
-    worker.on('message', (message: TableThreadMessage) => {
-      const inHand = this.inHand;
-      if (!inHand || message.token !== inHand.token) return;
-      if (message.kind === 'progress') inHand.onProgress(message.rowsDone);
-      else if (message.kind === 'succeeded') inHand.finish({ kind: 'succeeded', values: message.values, rays: message.rays, computeMs: message.computeMs });
-      else if (message.kind === 'failed') inHand.finish({ kind: 'failed', message: message.field && !message.message.includes(message.field) ? `${message.field}: ${message.message}` : message.message });
-      else inHand.finish({ kind: 'cancelled' });
-    });
-    worker.on('error', (err) => this.inHand?.finish({ kind: 'failed', message: `table thread crashed: ${err.message}` }));
-    worker.on('exit', (code) => {
-      if (this.worker === worker) this.worker = null;
-      const aborted = this.aborting;
-      this.aborting = false;
-      this.inHand?.finish(aborted ? { kind: 'aborted' } : { kind: 'failed', message: `table thread exited with code ${code}` });
-    });
-    worker.unref();
-    this.worker = worker;
-    return worker;
-  }
-}
-
-// ---------------------------------------------------------------------------------------------
 // The slot
 
 let slotsInProcess = 0;
@@ -366,73 +275,24 @@ let slotsInProcess = 0;
 /** How long a slot keeps fetching chunks itself before it returns to pg-boss's work loop (ms). */
 const DRAIN_MS = 30_000;
 
-/** One unit of a worker's concurrency on the table-chunk queue, with its own computation thread. */
-export class TableChunkSlot implements JobSlot {
-  readonly workerId: string;
-  private readonly thread = new TableThread();
-  private computation: BandComputation | null = null;
-  private idle: Promise<void> = Promise.resolve();
-  private releasing = false;
+const tableThreadEntry = new URL('./coefficient-table-thread.ts', import.meta.url);
+
+/** One unit of a worker's concurrency on the table-chunk queue, with its own computation thread; drains the queue like study cases. */
+export class TableChunkSlot extends LeasedSlot<TableBandInput, TableBandResult> {
   /** The last mesh loaded (bands of one table follow each other). */
   private meshCache: { meshId: string; mesh: TriangleMesh } | null = null;
 
-  constructor(
-    private readonly context: JobContext,
-    hostName: string,
-  ) {
-    this.workerId = `${hostName}:${process.pid}:table-${slotsInProcess++}`;
+  constructor(context: JobContext, hostName: string) {
+    super(context, `${hostName}:${process.pid}:table-${slotsInProcess++}`, tableThreadEntry, { queue: TABLE_CHUNK_QUEUE, ms: DRAIN_MS });
   }
 
-  /** pg-boss handler; like study cases, keeps fetching chunks for up to DRAIN_MS (a table has many). */
-  readonly handle = async (jobs: PgBoss.Job<unknown>[]): Promise<void> => {
-    let ended!: () => void;
-    this.idle = new Promise((resolve) => (ended = resolve));
-    try {
-      for (const job of jobs) await this.runJob(job);
-      const { boss } = this.context;
-      const until = Date.now() + DRAIN_MS;
-      while (!this.releasing && Date.now() < until) {
-        const [next] = await boss.fetch<unknown>(TABLE_CHUNK_QUEUE, { batchSize: 1 });
-        if (!next) break;
-        try {
-          await this.runJob(next);
-        } catch (err) {
-          await boss.fail(TABLE_CHUNK_QUEUE, next.id, { message: err instanceof Error ? err.message : String(err) });
-          continue;
-        }
-        await boss.complete(TABLE_CHUNK_QUEUE, next.id);
-      }
-    } finally {
-      this.computation = null;
-      ended();
-    }
-  };
-
-  whenIdle(): Promise<void> {
-    return this.idle;
-  }
-
-  async release(): Promise<void> {
-    this.releasing = true;
-    await this.computation?.abort();
-    await this.idle;
-  }
-
-  close(): Promise<void> {
-    return this.thread.close();
-  }
-
-  private async runJob(job: PgBoss.Job<unknown>): Promise<void> {
+  protected async runJob(job: PgBoss.Job<unknown>): Promise<void> {
     const payload = coefficientTableChunkJobSchema.safeParse(job.data);
     if (!payload.success) {
       console.error(`[worker] job ${job.id} on ${job.name} ignored: bad payload`);
       return;
     }
-    try {
-      await this.runChunk(payload.data.chunkId);
-    } finally {
-      this.computation = null;
-    }
+    await this.runChunk(payload.data.chunkId);
   }
 
   private async meshOf(meshId: string): Promise<TriangleMesh | null> {
@@ -458,58 +318,39 @@ export class TableChunkSlot implements JobSlot {
     }
 
     let rowsDone = 0;
-    const computation = this.thread.compute(
-      {
-        sceneKey: chunk.cacheKey,
-        positions: mesh.positions,
-        groupOfTriangle: mesh.groupOfTriangle,
-        groupNames: [...mesh.groupNames],
-        optics: chunk.optics as MeshOpticsInput,
-        settings: chunk.settings,
-        firstPolarRow: chunk.firstPolarRow,
-        endPolarRow: chunk.endPolarRow,
-      },
+    const input: TableBandInput = {
+      sceneKey: chunk.cacheKey,
+      positions: mesh.positions,
+      groupOfTriangle: mesh.groupOfTriangle,
+      groupNames: [...mesh.groupNames],
+      optics: chunk.optics as MeshOpticsInput,
+      settings: chunk.settings,
+      firstPolarRow: chunk.firstPolarRow,
+      endPolarRow: chunk.endPolarRow,
+    };
+    const { result, lost } = await this.computeHeld(
+      input,
       (rows) => {
         rowsDone = rows;
       },
+      () => chunkHeartbeat(sequelize, chunk, this.workerId, rowsDone),
+      `table chunk ${chunkId}`,
     );
-    this.computation = computation;
-    let lost = false;
-    let beat: Promise<void> | null = null;
-    const timer = setInterval(() => {
-      if (beat) return;
-      beat = chunkHeartbeat(sequelize, chunk, this.workerId, rowsDone)
-        .then(async (answer) => {
-          if (!answer.held) {
-            lost = true;
-            await computation.abort();
-          } else if (answer.cancel) computation.requestCancel();
-        })
-        .catch((err: unknown) => console.error(`[worker] heartbeat of table chunk ${chunkId} failed:`, err))
-        .finally(() => {
-          beat = null;
-        });
-    }, heartbeatIntervalMs(staleSeconds));
-    let result: BandResult;
-    try {
-      result = await computation.done;
-    } finally {
-      clearInterval(timer);
-      await beat;
-    }
     switch (result.kind) {
-      case 'succeeded':
-        if (!(await finishChunk(sequelize, chunk, this.workerId, result.values, result.rays, result.computeMs))) {
+      case 'succeeded': {
+        const band = result.result;
+        if (!(await finishChunk(sequelize, chunk, this.workerId, band.values, band.rays, band.computeMs))) {
           console.warn(`[worker] table chunk ${chunkId} was taken from ${this.workerId} before it finished; its rows are discarded`);
         }
         return;
+      }
       case 'cancelled':
         await endChunk(sequelize, chunkId, this.workerId, 'cancelled', null);
         return;
       case 'failed': {
-        const message = `chunk ${chunk.chunkIndex} (polar rows ${chunk.firstPolarRow}–${chunk.endPolarRow - 1}): ${result.message}`;
+        const message = `chunk ${chunk.chunkIndex} (polar rows ${chunk.firstPolarRow}–${chunk.endPolarRow - 1}): ${failureMessage(result.error)}`;
         await sequelize.transaction(async (transaction) => {
-          if (await endChunk(sequelize, chunkId, this.workerId, 'failed', result.message, transaction)) await failTable(sequelize, chunk.tableId, message, transaction);
+          if (await endChunk(sequelize, chunkId, this.workerId, 'failed', failureMessage(result.error), transaction)) await failTable(sequelize, chunk.tableId, message, transaction);
         });
         return;
       }

@@ -1,58 +1,60 @@
 import { Worker } from 'node:worker_threads';
-import type { RunOutcome } from '../services/run-outcome';
-import type { RunThreadError, RunThreadInput, RunThreadMessage, RunThreadRequest, RunThreadStart } from './run-thread-protocol';
+import type { ThreadError, ThreadMessage, ThreadRequest, ThreadStart } from './thread-protocol';
 
 /** How a computation in a thread ended. */
-export type ComputationResult =
-  | { kind: 'succeeded'; outcome: RunOutcome }
+export type ComputationResult<Result> =
+  | { kind: 'succeeded'; result: Result }
   | { kind: 'cancelled' }
-  | { kind: 'failed'; error: RunThreadError }
-  /** Stopped from outside by `abort()` (worker shutting down, or the run was taken away). */
+  | { kind: 'failed'; error: ThreadError }
+  /** Stopped from outside by `abort()` (worker shutting down, or the work was taken away). */
   | { kind: 'aborted' };
 
 /** One computation in hand. */
-export interface Computation {
+export interface Computation<Result> {
   /** Settles once, when the computation has ended. */
-  readonly done: Promise<ComputationResult>;
-  /** Asks the computation to stop at its next integrator step; it then ends as `cancelled`. */
+  readonly done: Promise<ComputationResult<Result>>;
+  /** Asks the computation to stop at its next check; it then ends as `cancelled`. */
   requestCancel(): void;
   /** Ends the thread at once (a new one is started for the next computation). */
   abort(): Promise<void>;
 }
 
 const bootUrl = new URL('./run-thread-boot.mjs', import.meta.url);
-const entryUrl = new URL('./run-thread.ts', import.meta.url).href;
 
-interface InHand {
+interface InHand<Result> {
   token: number;
-  onProgress: (fraction: number) => void;
-  finish: (result: ComputationResult) => void;
+  onProgress: (progress: number) => void;
+  finish: (result: ComputationResult<Result>) => void;
 }
 
 /**
- * A worker slot's computation thread (run-thread.ts), kept between runs: starting one costs about
- * a second of module loading and JIT warm-up, more than a short run itself. One computation at a time.
+ * A worker slot's computation thread, kept between computations: starting one costs about a
+ * second of module loading and JIT warm-up, more than a short run itself, and the thread may keep
+ * state between requests (a mesh scene). One computation at a time. `entry` is the thread's
+ * TypeScript module, which calls `serveComputations` (thread-host.ts).
  */
-export class ComputeThread {
+export class ComputeThread<Input, Result> {
   private worker: Worker | null = null;
   private readonly cancelFlag = new SharedArrayBuffer(Int32Array.BYTES_PER_ELEMENT);
   private readonly cancel = new Int32Array(this.cancelFlag);
-  private inHand: InHand | null = null;
+  private inHand: InHand<Result> | null = null;
   private aborting = false;
   private nextToken = 1;
+
+  constructor(private readonly entry: URL) {}
 
   /** Starts the thread now rather than at the first computation. */
   warmUp(): void {
     this.thread();
   }
 
-  /** Computes a run; `onProgress` gets the fraction done (0..1). */
-  compute(input: RunThreadInput, onProgress: (fraction: number) => void): Computation {
+  /** Starts a computation; `onProgress` gets what the thread reports. */
+  compute(input: Input, onProgress: (progress: number) => void): Computation<Result> {
     if (this.inHand) throw new Error('a compute thread takes one computation at a time');
     const worker = this.thread();
     const token = this.nextToken++;
     Atomics.store(this.cancel, 0, 0);
-    const done = new Promise<ComputationResult>((resolve) => {
+    const done = new Promise<ComputationResult<Result>>((resolve) => {
       this.inHand = {
         token,
         onProgress,
@@ -66,7 +68,7 @@ export class ComputeThread {
     });
     // Referenced while it computes, so that awaiting the result keeps the process alive.
     worker.ref();
-    worker.postMessage({ token, input } satisfies RunThreadRequest);
+    worker.postMessage({ token, input } satisfies ThreadRequest<Input>);
     return {
       done,
       requestCancel: () => {
@@ -89,13 +91,13 @@ export class ComputeThread {
 
   private thread(): Worker {
     if (this.worker) return this.worker;
-    const start: RunThreadStart = { entry: entryUrl, cancelFlag: this.cancelFlag };
+    const start: ThreadStart = { entry: this.entry.href, cancelFlag: this.cancelFlag };
     const worker = new Worker(bootUrl, { workerData: start });
-    worker.on('message', (message: RunThreadMessage) => {
+    worker.on('message', (message: ThreadMessage<Result>) => {
       const inHand = this.inHand;
       if (!inHand || message.token !== inHand.token) return;
-      if (message.kind === 'progress') inHand.onProgress(message.fraction);
-      else if (message.kind === 'succeeded') inHand.finish({ kind: 'succeeded', outcome: message.outcome });
+      if (message.kind === 'progress') inHand.onProgress(message.progress);
+      else if (message.kind === 'succeeded') inHand.finish({ kind: 'succeeded', result: message.result });
       else if (message.kind === 'failed') inHand.finish({ kind: 'failed', error: message.error });
       else inHand.finish({ kind: 'cancelled' });
     });

@@ -11,16 +11,11 @@ import { fieldErrors, propagationJobSchema, scenarioSchema, vehicleSpecSchema } 
 import { UploadModel, VehicleRevisionModel } from '../models';
 import type { RunOutcome } from '../services/run-outcome';
 import { loadVehicleTable, VehicleTableError } from '../services/coefficient-table-service';
-import { ComputeThread, type Computation } from './compute-thread';
+import { failureMessage, LeasedSlot } from './leased-slot';
 import { mailIfLongRun } from '../services/mail-delivery';
 import { claimRun, finishSucceeded, finishWithoutResult, heartbeat, takeBackRuns, type ClaimedRun } from './run-lease';
-import type { RunThreadError, RunThreadInput } from './run-thread-protocol';
-import type { JobContext, JobSlot } from './index';
-
-/** Milliseconds between heartbeats: every second, and at least three per stale period. */
-export function heartbeatIntervalMs(staleSeconds: number): number {
-  return Math.min(1000, (staleSeconds * 1000) / 3);
-}
+import type { RunThreadInput } from './run-thread-protocol';
+import type { JobContext } from './index';
 
 /** A computation that cannot start, with the message the run shows (naming the field). */
 class RunInputError extends Error {}
@@ -61,87 +56,32 @@ async function loadRunInput(run: ClaimedRun): Promise<RunThreadInput> {
   return input;
 }
 
-/** The run's error message: srp-core's message, with the field in front when the message does not name it. */
-export function failureMessage(error: RunThreadError): string {
-  const { field, message } = error;
-  if (!field || message.includes(field) || message.startsWith(field.split('.')[0]!)) return message;
-  return `${field}: ${message}`;
-}
-
-interface InHand {
-  runId: string;
-  computation: Computation | null;
-}
-
 let slotsInProcess = 0;
+
+const runThreadEntry = new URL('./run-thread.ts', import.meta.url);
 
 /**
  * One unit of a worker's concurrency: one job at a time, with its own computation thread. Its id
  * (`host:pid:n`, n counted over the process, so two workers in one process never share one) is
  * what the run row's worker_id names.
  */
-export class PropagationSlot implements JobSlot {
-  readonly workerId: string;
-  private readonly thread = new ComputeThread();
-  private inHand: InHand | null = null;
-  private idle: Promise<void> = Promise.resolve();
-  /** The worker is stopping: a run in hand is given back to the queue instead of finished. */
-  private releasing = false;
-
-  constructor(
-    private readonly context: JobContext,
-    hostName: string,
-  ) {
-    this.workerId = `${hostName}:${process.pid}:${slotsInProcess++}`;
+export class PropagationSlot extends LeasedSlot<RunThreadInput, RunOutcome> {
+  constructor(context: JobContext, hostName: string) {
+    super(context, `${hostName}:${process.pid}:${slotsInProcess++}`, runThreadEntry, null);
     this.thread.warmUp();
   }
 
-  /** pg-boss handler (batch size 1). Throws only when the database fails, so that pg-boss retries. */
-  readonly handle = async (jobs: PgBoss.Job<unknown>[]): Promise<void> => {
-    for (const job of jobs) {
-      const payload = propagationJobSchema.safeParse(job.data);
-      if (!payload.success) {
-        console.error(`[worker] job ${job.id} on ${job.name} ignored: ${Object.entries(fieldErrors(payload.error)).map(([k, v]) => `${k}: ${v}`).join('; ')}`);
-        continue;
-      }
-      let ended!: () => void;
-      this.idle = new Promise((resolve) => (ended = resolve));
-      try {
-        await this.runJob(payload.data.runId);
-      } finally {
-        this.inHand = null;
-        ended();
-      }
+  protected async runJob(job: PgBoss.Job<unknown>): Promise<void> {
+    const payload = propagationJobSchema.safeParse(job.data);
+    if (!payload.success) {
+      console.error(`[worker] job ${job.id} on ${job.name} ignored: ${Object.entries(fieldErrors(payload.error)).map(([k, v]) => `${k}: ${v}`).join('; ')}`);
+      return;
     }
-  };
-
-  /** Resolves when no job is in hand. */
-  whenIdle(): Promise<void> {
-    return this.idle;
-  }
-
-  /** Stops the computation in hand and gives its run back to the queue. */
-  async release(): Promise<void> {
-    this.releasing = true;
-    await this.inHand?.computation?.abort();
-    await this.idle;
-  }
-
-  /** Ends the computation thread (after the last job). */
-  close(): Promise<void> {
-    return this.thread.close();
-  }
-
-  private async runJob(runId: string): Promise<void> {
+    const { runId } = payload.data;
     const { sequelize, staleSeconds } = this.context;
     const run = await claimRun(sequelize, runId, this.workerId, staleSeconds);
     if (!run) return; // finished, cancelled, or held by a live worker: nothing to do
-    const inHand: InHand = { runId, computation: null };
-    this.inHand = inHand;
-    if (this.releasing) {
-      await this.giveBack(runId);
-      return;
-    }
+    if (this.releasing) return this.giveBack(runId);
 
     let input: RunThreadInput;
     try {
@@ -151,48 +91,23 @@ export class PropagationSlot implements JobSlot {
       await finishWithoutResult(sequelize, runId, this.workerId, 'failed', err.message);
       return;
     }
-    if (this.releasing) {
-      await this.giveBack(runId);
-      return;
-    }
+    if (this.releasing) return this.giveBack(runId);
 
     let progress = 0;
-    const computation = this.thread.compute(input, (fraction) => {
-      progress = fraction;
-    });
-    inHand.computation = computation;
-    let lost = false;
-    let beat: Promise<void> | null = null;
-    const timer = setInterval(() => {
-      if (beat) return;
-      beat = heartbeat(sequelize, runId, this.workerId, progress)
-        .then(async (answer) => {
-          if (!answer.held) {
-            // Taken back (this worker was presumed dead) or finished elsewhere: stop, write nothing.
-            lost = true;
-            await computation.abort();
-          } else if (answer.cancelRequested) {
-            computation.requestCancel();
-          }
-        })
-        // A missed beat is not fatal; enough of them and the run goes to another worker.
-        .catch((err: unknown) => console.error(`[worker] heartbeat of run ${runId} failed:`, err))
-        .finally(() => {
-          beat = null;
-        });
-    }, heartbeatIntervalMs(staleSeconds));
-
-    let result;
-    try {
-      result = await computation.done;
-    } finally {
-      clearInterval(timer);
-      await beat;
-    }
-
+    const { result, lost } = await this.computeHeld(
+      input,
+      (fraction) => {
+        progress = fraction;
+      },
+      async () => {
+        const answer = await heartbeat(sequelize, runId, this.workerId, progress);
+        return { held: answer.held, cancel: answer.cancelRequested };
+      },
+      `run ${runId}`,
+    );
     switch (result.kind) {
       case 'succeeded':
-        await this.storeOutcome(runId, result.outcome);
+        await this.storeOutcome(runId, result.result);
         return;
       case 'cancelled':
         await finishWithoutResult(sequelize, runId, this.workerId, 'cancelled');

@@ -1,6 +1,6 @@
 /**
  * The `study-case` job: compute one case of a trade study. Same pattern as a run (propagation-job.ts):
- * the slot claims the case row with a guarded UPDATE, computes in its own thread (compute-thread.ts)
+ * the slot claims the case row with a guarded UPDATE, computes in its own thread (leased-slot.ts)
  * with a heartbeat every second that also reads the study's cancel flag, and stores the budget line
  * values only if it still holds the case. A case whose worker died (no heartbeat for the stale
  * period) is taken back by the reaper every worker runs (study-case-reaper.ts) and queued again.
@@ -13,10 +13,11 @@ import { noteStudyFinishedIfLast } from '../services/mail-delivery';
 import { STUDY_CASE_QUEUE } from '../services/study-service';
 import { loadVehicleTable, VehicleTableError } from '../services/coefficient-table-service';
 import type { SrpCoefficientTable } from '@photon-ledger/srp-core';
-import { ComputeThread, type Computation } from './compute-thread';
-import { failureMessage, heartbeatIntervalMs } from './propagation-job';
+import { failureMessage, LeasedSlot } from './leased-slot';
+import type { RunOutcome } from '../services/run-outcome';
+import type { RunThreadInput } from './run-thread-protocol';
 import { sendJob } from './queue';
-import type { JobContext, JobSlot } from './index';
+import type { JobContext } from './index';
 
 interface ClaimedCase {
   id: string;
@@ -83,75 +84,24 @@ let slotsInProcess = 0;
 /** How long a slot keeps fetching cases itself before it returns to pg-boss's work loop (ms). */
 const DRAIN_MS = 30_000;
 
-/** One unit of a worker's concurrency on the study-case queue, with its own computation thread. */
-export class StudyCaseSlot implements JobSlot {
-  readonly workerId: string;
-  private readonly thread = new ComputeThread();
-  private computation: Computation | null = null;
-  private idle: Promise<void> = Promise.resolve();
-  private releasing = false;
+const runThreadEntry = new URL('./run-thread.ts', import.meta.url);
 
-  constructor(
-    private readonly context: JobContext,
-    hostName: string,
-  ) {
-    this.workerId = `${hostName}:${process.pid}:study-${slotsInProcess++}`;
+/**
+ * One unit of a worker's concurrency on the study-case queue, with its own computation thread.
+ * A study's cases are short and many: the slot drains the queue (LeasedSlot's drain mode).
+ */
+export class StudyCaseSlot extends LeasedSlot<RunThreadInput, RunOutcome> {
+  constructor(context: JobContext, hostName: string) {
+    super(context, `${hostName}:${process.pid}:study-${slotsInProcess++}`, runThreadEntry, { queue: STUDY_CASE_QUEUE, ms: DRAIN_MS });
   }
 
-  /**
-   * pg-boss handler. A study's cases are short and many, and the work loop waits its polling
-   * interval between batches, so after the job handed in the slot fetches further cases itself
-   * (completing or failing each) for up to DRAIN_MS before it returns to the loop.
-   */
-  readonly handle = async (jobs: PgBoss.Job<unknown>[]): Promise<void> => {
-    let ended!: () => void;
-    this.idle = new Promise((resolve) => (ended = resolve));
-    try {
-      for (const job of jobs) await this.runJob(job);
-      const { boss } = this.context;
-      const until = Date.now() + DRAIN_MS;
-      while (!this.releasing && Date.now() < until) {
-        const [next] = await boss.fetch<unknown>(STUDY_CASE_QUEUE, { batchSize: 1 });
-        if (!next) break;
-        try {
-          await this.runJob(next);
-        } catch (err) {
-          await boss.fail(STUDY_CASE_QUEUE, next.id, { message: err instanceof Error ? err.message : String(err) });
-          continue;
-        }
-        await boss.complete(STUDY_CASE_QUEUE, next.id);
-      }
-    } finally {
-      this.computation = null;
-      ended();
-    }
-  };
-
-  private async runJob(job: PgBoss.Job<unknown>): Promise<void> {
+  protected async runJob(job: PgBoss.Job<unknown>): Promise<void> {
     const payload = studyCaseJobSchema.safeParse(job.data);
     if (!payload.success) {
       console.error(`[worker] job ${job.id} on ${job.name} ignored: bad payload`);
       return;
     }
-    try {
-      await this.runCase(payload.data.caseId);
-    } finally {
-      this.computation = null;
-    }
-  }
-
-  whenIdle(): Promise<void> {
-    return this.idle;
-  }
-
-  async release(): Promise<void> {
-    this.releasing = true;
-    await this.computation?.abort();
-    await this.idle;
-  }
-
-  close(): Promise<void> {
-    return this.thread.close();
+    await this.runCase(payload.data.caseId);
   }
 
   private async runCase(caseId: string): Promise<void> {
@@ -187,39 +137,16 @@ export class StudyCaseSlot implements JobSlot {
         return;
       }
     }
-    const computation = this.thread.compute(
-      {
-        scenario: scenario.data as Scenario,
-        vehicle: vehicle.data as VehicleSpec,
-        vehicleRevisionId: claimed.vehicleRevisionId,
-        ...(meshTable ? { meshTable } : {}),
-      },
-      () => {},
-    );
-    this.computation = computation;
-    let beat: Promise<void> | null = null;
-    const timer = setInterval(() => {
-      if (beat) return;
-      beat = caseHeartbeat(sequelize, caseId, this.workerId)
-        .then(async (answer) => {
-          if (!answer.held) await computation.abort();
-          else if (answer.cancel) computation.requestCancel();
-        })
-        .catch((err: unknown) => console.error(`[worker] heartbeat of study case ${caseId} failed:`, err))
-        .finally(() => {
-          beat = null;
-        });
-    }, heartbeatIntervalMs(staleSeconds));
-    let result;
-    try {
-      result = await computation.done;
-    } finally {
-      clearInterval(timer);
-      await beat;
-    }
+    const input: RunThreadInput = {
+      scenario: scenario.data as Scenario,
+      vehicle: vehicle.data as VehicleSpec,
+      vehicleRevisionId: claimed.vehicleRevisionId,
+      ...(meshTable ? { meshTable } : {}),
+    };
+    const { result, lost } = await this.computeHeld(input, () => {}, () => caseHeartbeat(sequelize, caseId, this.workerId), `study case ${caseId}`);
     switch (result.kind) {
       case 'succeeded': {
-        const lines = Object.fromEntries(result.outcome.budget.lines.map((line) => [line.key, line.value]));
+        const lines = Object.fromEntries(result.result.budget.lines.map((line) => [line.key, line.value]));
         if (await finishCase(sequelize, caseId, this.workerId, 'succeeded', lines, null)) await noteStudyFinishedIfLast(this.context.boss, sequelize, caseId);
         return;
       }
@@ -232,7 +159,7 @@ export class StudyCaseSlot implements JobSlot {
         }
         return;
       case 'aborted':
-        if (this.releasing) await this.giveBack(caseId);
+        if (this.releasing && !lost) await this.giveBack(caseId);
     }
   }
 

@@ -4,7 +4,7 @@
  */
 import { SrpError } from '../errors';
 import type { ReadonlyVec3, Vec3 } from '../math/vec3';
-import { anyHit, closestHit, createMeshRay, createMeshSweep, sweptBoxMeetsAny } from './mesh-bvh';
+import { anyHit, closestHit, createMeshRay, createMeshSweep, sweptPrismMeetsAny } from './mesh-bvh';
 import { BACK_UNSHADOWABLE, FRONT_UNSHADOWABLE, type MeshScene } from './mesh-scene';
 
 /** Options of `illuminateMesh`. */
@@ -16,7 +16,7 @@ export interface IlluminateOptions {
   /**
    * Skip the shadow rays of a facet when an exact test shows nothing can shade it (default true):
    * the scene's pre-pass (no vertex in front of the facet's plane), then, per Sun direction, the
-   * facet swept towards the Sun meeting no triangle (`sweptBoxMeetsAny`). False casts every ray:
+   * facet swept towards the Sun meeting no triangle (`sweptPrismMeetsAny`). False casts every ray:
    * for tests of the ray casting itself.
    */
   prePass?: boolean | undefined;
@@ -263,7 +263,7 @@ export function illuminateMesh(
       sweep[21] = oz + e2z;
       sweep[22] = offset;
       sweeps += 1;
-      shadowFree = !sweptBoxMeetsAny(bvh, sweep, row);
+      shadowFree = !sweptPrismMeetsAny(bvh, sweep, row);
       if (!shadowFree) out.sweepHold[t] = SWEEP_HOLD_CALLS;
     }
 

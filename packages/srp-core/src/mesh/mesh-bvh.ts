@@ -9,16 +9,16 @@
  * Tools 2(1), 1997; binned SAH as in Wald, "On fast construction of SAH-based bounding volume
  * hierarchies", IEEE Symp. Interactive Ray Tracing, 2007 (both from memory).
  *
- * A swept-box query (`sweptBoxMeetsAny`) answers for all the shadow rays of a facet at once when
- * nothing can shade it.
+ * A swept-prism query (`sweptPrismMeetsAny`) answers for all the shadow rays of a facet at once
+ * when nothing can shade it.
  *
  * Why our own rather than a library (three-mesh-bvh): srp-core stays free of dependencies beyond
  * its own files (purity.test.ts), and shadow rays need only positions, not `three` objects.
  * Measured (bench/mesh.bench.ts, 9876-triangle box-wing, 317 124 shadow rays from facet
- * centroids, both blocking the same 22.8 %): this BVH's any-hit 3.7 to 5.5 million rays/s,
- * three-mesh-bvh 0.8.3's `raycastFirst` (its fastest ray query: nearest hit, float32 positions,
- * a result object per hit) 0.2 to 0.5 million rays/s, 9 to 26 times slower on this shared,
- * noisy 2-core machine.
+ * centroids, both blocking the same 22.8 %; five runs on this shared 2-core machine): this BVH's
+ * any-hit 2.5 to 5.4 million rays/s, three-mesh-bvh 0.8.3's `raycastFirst` (its fastest ray
+ * query: nearest hit, float32 positions, a result object per hit) 0.29 to 0.48 million rays/s;
+ * ours 8.7 to 13.7 times faster in the same run.
  */
 import { SrpError } from '../errors';
 
@@ -504,14 +504,14 @@ export function anyVertexInFront(
 }
 
 /**
- * The query of `sweptBoxMeetsAny`, reused: 0-2 centre and 3-5 half-extents (m) of a box, 6-8 the
+ * The query of `sweptPrismMeetsAny`, reused: 0-2 centre and 3-5 half-extents (m) of a box, 6-8 the
  * unit direction it is swept along (to infinity), 9-11 a unit plane normal n and 12 a level h:
  * only triangles with a vertex above the plane (n · p > h) count; 13-21 the three corners of the
  * triangle the rays leave from (inside the box), 22 the rounding margin (m).
  */
 export type MeshSweep = Float64Array;
 
-/** A sweep buffer for `sweptBoxMeetsAny`. */
+/** A sweep buffer for `sweptPrismMeetsAny`. */
 export function createMeshSweep(): MeshSweep {
   return new Float64Array(23);
 }
@@ -526,7 +526,7 @@ export function createMeshSweep(): MeshSweep {
  * nothing shades it; the normal test clears the neighbours of a facet on a concave surface.
  * Allocates nothing.
  */
-export function sweptBoxMeetsAny(bvh: MeshBvh, sweep: MeshSweep, skipRow: number): boolean {
+export function sweptPrismMeetsAny(bvh: MeshBvh, sweep: MeshSweep, skipRow: number): boolean {
   const cx = sweep[0]!;
   const cy = sweep[1]!;
   const cz = sweep[2]!;

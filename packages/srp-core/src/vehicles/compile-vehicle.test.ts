@@ -48,7 +48,7 @@ describe('compileVehicle refuses bad specs with an SrpError naming the field', (
     ['a zero mass', { ...withPlate3({}), massKg: 0 }, 'out_of_range', 'massKg'],
     ['a missing centre of mass', { ...withPlate3({}), centreOfMassM: undefined }, 'invalid_input', 'centreOfMassM'],
     ['an empty name', { ...withPlate3({}), name: '' }, 'invalid_input', 'name'],
-    ['an unknown kind', { kind: 'mesh', name: 'm', massKg: 1, centreOfMassM: [0, 0, 0] }, 'invalid_input', 'kind'],
+    ['an unknown kind', { kind: 'hull', name: 'm', massKg: 1, centreOfMassM: [0, 0, 0] }, 'invalid_input', 'kind'],
     ['a cannonball Cr above 2', { kind: 'cannonball', name: 'b', massKg: 1, centreOfMassM: [0, 0, 0], areaM2: 1, cr: 2.5 }, 'out_of_range', 'cr'],
     ['a cannonball with a negative area', { kind: 'cannonball', name: 'b', massKg: 1, centreOfMassM: [0, 0, 0], areaM2: -1, cr: 1 }, 'out_of_range', 'areaM2'],
   ];
