@@ -11,39 +11,11 @@ import { randomUUID } from 'node:crypto';
 import { afterAll, beforeAll, describe, expect, inject, it } from 'vitest';
 import type { Page } from 'playwright-core';
 import { artifactsDir, openBrowser } from './browser';
+import { canvasContent, signIn } from './page-helpers';
 
 const shot = (page: Page, name: string) => page.screenshot({ path: path.join(artifactsDir, `journey-${name}.png`), fullPage: true });
 
-async function signIn(page: Page, email: string, password: string): Promise<void> {
-  await page.goto(`${inject('baseUrl')}/sign-in`);
-  await page.getByLabel('E-mail').fill(email);
-  await page.getByLabel('Password').fill(password);
-  await page.getByRole('button', { name: 'Sign in', exact: true }).click();
-  await page.getByRole('heading', { name: 'Missions' }).waitFor();
-}
 
-/** Distinct colours and the share of pixels unlike the corner pixel, read back from a WebGL canvas. */
-async function canvasContent(page: Page, label: string): Promise<{ colours: number; drawnShare: number; width: number }> {
-  return page.evaluate((name) => {
-    const host = document.querySelector(`[aria-label="${name}"]`);
-    const canvas = host instanceof HTMLCanvasElement ? host : host?.querySelector('canvas');
-    if (!canvas) throw new Error(`no canvas labelled ${name}`);
-    const copy = document.createElement('canvas');
-    copy.width = canvas.width;
-    copy.height = canvas.height;
-    const ctx = copy.getContext('2d')!;
-    ctx.drawImage(canvas, 0, 0);
-    const data = ctx.getImageData(0, 0, copy.width, copy.height).data;
-    const colours = new Set<number>();
-    let drawn = 0;
-    const [r0, g0, b0] = [data[0]!, data[1]!, data[2]!];
-    for (let i = 0; i < data.length; i += 4) {
-      colours.add((data[i]! << 16) | (data[i + 1]! << 8) | data[i + 2]!);
-      if (Math.abs(data[i]! - r0) + Math.abs(data[i + 1]! - g0) + Math.abs(data[i + 2]! - b0) > 30) drawn += 1;
-    }
-    return { colours: colours.size, drawnShare: drawn / (data.length / 4), width: canvas.width };
-  }, label);
-}
 
 describe('main journey: vehicle, scenario, run, budget, CSV; then a reviewer', () => {
   let browser: Awaited<ReturnType<typeof openBrowser>>;
@@ -63,7 +35,7 @@ describe('main journey: vehicle, scenario, run, budget, CSV; then a reviewer', (
   afterAll(() => browser?.close());
 
   it('the engineer builds a 3-plate vehicle and the 3D preview draws it', async () => {
-    await signIn(page, 'ines.okafor@ostrander-vale.example', 'demo-engineer-2026');
+    await signIn(page, 'engineer');
     await page.getByRole('link', { name: 'Corvina-2' }).click();
     await page.getByRole('heading', { name: 'Corvina-2' }).waitFor();
     missionUrl = page.url();
@@ -91,7 +63,7 @@ describe('main journey: vehicle, scenario, run, budget, CSV; then a reviewer', (
     // Give the software renderer a few frames.
     await page.waitForTimeout(1500);
     await shot(page, '1-vehicle-editor');
-    const content = await canvasContent(page, '3D preview of the vehicle');
+    const content = await canvasContent(page, '[aria-label="3D preview of the vehicle"]');
     expect(content.width).toBeGreaterThan(100);
     expect(content.colours, 'the preview canvas is not one flat colour').toBeGreaterThan(20);
     expect(content.drawnShare, 'something is drawn over the background').toBeGreaterThan(0.005);
@@ -146,7 +118,7 @@ describe('main journey: vehicle, scenario, run, budget, CSV; then a reviewer', (
   it('a reviewer sees the same pages with no edit control', async () => {
     await page.getByRole('button', { name: 'Sign out' }).click();
     await page.getByRole('heading', { name: 'Sign in to Photon Ledger' }).waitFor();
-    await signIn(page, 'mara.castellanos@ostrander-vale.example', 'demo-reviewer-2026');
+    await signIn(page, 'reviewer');
     const editControls = ['Save revision', 'Create vehicle', 'Add plate', 'Undo', 'Import plate CSV', 'Save scenario', 'Create scenario', 'Start run', 'Cancel run', 'Re-run', 'Cancel', 'Delete scenario'];
     for (const [url, marker] of [[vehicleUrl, vehicleName], [scenarioUrl, scenarioName], [runUrl, 'Budget']] as const) {
       await page.goto(url);

@@ -11,39 +11,11 @@ import { randomUUID } from 'node:crypto';
 import { afterAll, beforeAll, describe, expect, inject, it } from 'vitest';
 import type { Page } from 'playwright-core';
 import { artifactsDir, openBrowser } from './browser';
+import { canvasContent, signIn } from './page-helpers';
 
 const shot = (page: Page, name: string) => page.screenshot({ path: path.join(artifactsDir, `mesh-${name}.png`), fullPage: true });
 
-async function signIn(page: Page, email: string, password: string): Promise<void> {
-  await page.goto(`${inject('baseUrl')}/sign-in`);
-  await page.getByLabel('E-mail').fill(email);
-  await page.getByLabel('Password').fill(password);
-  await page.getByRole('button', { name: 'Sign in', exact: true }).click();
-  await page.getByRole('heading', { name: 'Missions' }).waitFor();
-}
 
-/** Distinct colours and the share of pixels unlike the corner pixel (the background), read back from a canvas. */
-async function canvasContent(page: Page, label: string): Promise<{ colours: number; drawnShare: number; width: number }> {
-  return page.evaluate((name) => {
-    const host = document.querySelector(`[aria-label="${name}"]`);
-    const canvas = host instanceof HTMLCanvasElement ? host : host?.querySelector('canvas');
-    if (!canvas) throw new Error(`no canvas labelled ${name}`);
-    const copy = document.createElement('canvas');
-    copy.width = canvas.width;
-    copy.height = canvas.height;
-    const ctx = copy.getContext('2d')!;
-    ctx.drawImage(canvas, 0, 0);
-    const data = ctx.getImageData(0, 0, copy.width, copy.height).data;
-    const colours = new Set<number>();
-    let drawn = 0;
-    const [r0, g0, b0] = [data[0]!, data[1]!, data[2]!];
-    for (let i = 0; i < data.length; i += 4) {
-      colours.add((data[i]! << 16) | (data[i + 1]! << 8) | data[i + 2]!);
-      if (Math.abs(data[i]! - r0) + Math.abs(data[i + 1]! - g0) + Math.abs(data[i + 2]! - b0) > 30) drawn += 1;
-    }
-    return { colours: colours.size, drawnShare: drawn / (data.length / 4), width: canvas.width };
-  }, label);
-}
 
 /** A 1 m box at the origin (group bus) and a 2 m square plate 1 m above its top facing +z (group shade). */
 const boxAndPlateObj = `# box and shading plate, metres, counter-clockwise seen from outside
@@ -90,7 +62,7 @@ describe('mesh vehicle: import, lit 3D view, 15° table and its map; then a revi
   afterAll(() => browser?.close());
 
   it('the engineer imports an OBJ and sees its summary', async () => {
-    await signIn(page, 'ines.okafor@ostrander-vale.example', 'demo-engineer-2026');
+    await signIn(page, 'engineer');
     await page.getByRole('link', { name: 'Corvina-2' }).click();
     await page.getByRole('heading', { name: 'Corvina-2' }).waitFor();
     await page.getByRole('link', { name: 'Meshes', exact: true }).click();
@@ -144,7 +116,7 @@ describe('mesh vehicle: import, lit 3D view, 15° table and its map; then a revi
     await page.getByLabel(MESH_VIEW).waitFor();
     await page.waitForTimeout(1500);
     await shot(page, '2-mesh-page');
-    const content = await canvasContent(page, MESH_VIEW);
+    const content = await canvasContent(page, `[aria-label="${MESH_VIEW}"]`);
     expect(content.width).toBeGreaterThan(100);
     expect(content.colours, 'the 3D canvas is not one flat colour').toBeGreaterThan(20);
     expect(content.drawnShare, 'something is drawn over the background').toBeGreaterThan(0.01);
@@ -174,7 +146,7 @@ describe('mesh vehicle: import, lit 3D view, 15° table and its map; then a revi
     await page.mouse.move(box.x + box.width * 0.25, box.y + box.height * 0.02);
     await page.getByText(/θ 0°, φ \d+°/).waitFor();
     expect(await page.getByText(/m² · .* N at 1 au/).count()).toBeGreaterThan(0);
-    const mapContent = await canvasContent(page, FORCE_MAP);
+    const mapContent = await canvasContent(page, `[aria-label="${FORCE_MAP}"]`);
     expect(mapContent.colours, 'the map has more than one colour').toBeGreaterThan(10);
     await expect(page.getByText(/analysis aid/).count()).resolves.toBeGreaterThan(0);
     await page.waitForTimeout(800);
@@ -184,7 +156,7 @@ describe('mesh vehicle: import, lit 3D view, 15° table and its map; then a revi
   it('a reviewer sees the meshes and the vehicle with no import form and no edit control', async () => {
     await page.getByRole('button', { name: 'Sign out' }).click();
     await page.getByRole('heading', { name: 'Sign in to Photon Ledger' }).waitFor();
-    await signIn(page, 'mara.castellanos@ostrander-vale.example', 'demo-reviewer-2026');
+    await signIn(page, 'reviewer');
     await page.goto(meshesUrl);
     await page.getByRole('link', { name: meshName }).waitFor();
     expect(await page.getByRole('button', { name: 'Import mesh' }).count()).toBe(0);

@@ -14,23 +14,12 @@ import { randomUUID } from 'node:crypto';
 import { afterAll, beforeAll, describe, expect, inject, it } from 'vitest';
 import type { Page } from 'playwright-core';
 import { artifactsDir, openBrowser } from './browser';
+import { canvasContent, demoUsers, signIn, type DemoRole } from './page-helpers';
 
 const repoRoot = path.resolve(path.dirname(fileURLToPath(import.meta.url)), '../../..');
 const shot = (page: Page, name: string) => page.screenshot({ path: path.join(artifactsDir, `study-review-${name}.png`), fullPage: true });
 
-const users = {
-  engineer: ['ines.okafor@ostrander-vale.example', 'demo-engineer-2026'],
-  lead: ['teodor.lindqvist@ostrander-vale.example', 'demo-lead-2026'],
-  reviewer: ['mara.castellanos@ostrander-vale.example', 'demo-reviewer-2026'],
-} as const;
 
-async function signIn(page: Page, role: keyof typeof users): Promise<void> {
-  await page.goto(`${inject('baseUrl')}/sign-in`);
-  await page.getByLabel('E-mail').fill(users[role][0]);
-  await page.getByLabel('Password').fill(users[role][1]);
-  await page.getByRole('button', { name: 'Sign in', exact: true }).click();
-  await page.getByRole('heading', { name: 'Missions' }).waitFor();
-}
 
 /** A tiny JSON client of the API with its own session cookie. */
 function apiClient() {
@@ -49,34 +38,12 @@ function apiClient() {
   };
 }
 
-/** Distinct colours and the share of pixels unlike the corner pixel of the first canvas under a labelled element. */
-async function canvasContent(page: Page, selector: string): Promise<{ colours: number; drawnShare: number; width: number }> {
-  return page.evaluate((sel) => {
-    const canvas = document.querySelector(sel)?.querySelector('canvas');
-    if (!canvas) throw new Error(`no canvas under ${sel}`);
-    const copy = document.createElement('canvas');
-    copy.width = canvas.width;
-    copy.height = canvas.height;
-    const ctx = copy.getContext('2d')!;
-    ctx.drawImage(canvas, 0, 0);
-    const data = ctx.getImageData(0, 0, copy.width, copy.height).data;
-    const colours = new Set<number>();
-    let drawn = 0;
-    const [r0, g0, b0] = [data[0]!, data[1]!, data[2]!];
-    for (let i = 0; i < data.length; i += 4) {
-      if (data[i + 3] === 0) continue;
-      colours.add((data[i]! << 16) | (data[i + 1]! << 8) | data[i + 2]!);
-      if (Math.abs(data[i]! - r0) + Math.abs(data[i + 1]! - g0) + Math.abs(data[i + 2]! - b0) > 30) drawn += 1;
-    }
-    return { colours: colours.size, drawnShare: drawn / (data.length / 4), width: canvas.getBoundingClientRect().width };
-  }, selector);
-}
 
 const reviewButtons = ['Submit for review', 'Submit again for review', 'Approve and freeze', 'Send back…', 'Send back with this reason', 'Cancel study'];
 
 describe('trade-study review: submit, send back, approve; reviewer comments; printable report', () => {
   const browsers: Awaited<ReturnType<typeof openBrowser>>[] = [];
-  const pages = {} as Record<keyof typeof users, Page>;
+  const pages = {} as Record<DemoRole, Page>;
   const tag = randomUUID().slice(0, 6);
   const studyName = `Review grid ${tag}`;
   const reason = `Add the heavier bus to the note (${tag}).`;
@@ -89,7 +56,7 @@ describe('trade-study review: submit, send back, approve; reviewer comments; pri
 
   beforeAll(async () => {
     const api = apiClient();
-    await api('POST', '/api/auth/login', { email: users.engineer[0], password: users.engineer[1] });
+    await api('POST', '/api/auth/login', { email: demoUsers.engineer[0], password: demoUsers.engineer[1] });
     const { missions } = await api<{ missions: { id: string; name: string }[] }>('GET', '/api/missions');
     missionId = missions.find((m) => m.name === 'Corvina-2')!.id;
     const spec = JSON.parse(readFileSync(path.join(repoRoot, 'fixtures/vehicles/corvina-2.vehicle.json'), 'utf8')) as unknown;
