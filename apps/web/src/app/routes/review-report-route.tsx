@@ -1,4 +1,4 @@
-import { lazy, Suspense, useMemo, type ReactNode } from 'react';
+import { lazy, Suspense, useMemo } from 'react';
 import { Link, useParams } from 'react-router-dom';
 import { runParamsSchema } from '@photon-ledger/shared';
 import { Button } from '../../components/ui/button';
@@ -9,7 +9,7 @@ import { NotFound } from '../../components/ui/not-found';
 import { useComments } from '../../features/comments/api/list-comments';
 import { useMission } from '../../features/missions/api/get-mission';
 import { useReview } from '../../features/reviews/api/get-review';
-import { reviewStateLabels } from '../../features/reviews/components/review-state-badge';
+import { ApprovalSection, ReportSection, reportPrintCss, reportTime, Term } from '../../features/reviews/components/report-parts';
 import { useRun } from '../../features/runs/api/get-run';
 import { useRunBudget } from '../../features/runs/api/get-run-budget';
 import { useRunSummary } from '../../features/runs/api/get-run-summary';
@@ -18,36 +18,18 @@ import { BudgetTable } from '../../features/runs/components/budget-table';
 import { useRunEvents } from '../../features/runs/api/get-run-events';
 import { ChartsPlaceholder } from '../../features/runs/components/charts/chart-frame';
 import { pairEclipses } from '../../features/runs/lib/eclipses';
-import { ReviewHistory } from '../../features/reviews/components/review-history';
 
 // uPlot stays out of the first bundle.
 const RunCharts = lazy(() => import('../../features/runs/components/charts/run-charts'));
 
-/**
- * Print rules: no app chrome, no buttons, black on white, tables kept whole. The report is laid
- * out at most 680 CSS px wide on screen too, so the chart canvases are drawn at the width of an A4
- * page (210 mm less 2 × 14 mm margins ≈ 688 px) and print without scaling or clipping.
- */
-const printCss = `
+/** Beside the shared print rules: a budget table that fits A4 and charts without their view controls. */
+const runReportCss = `
 .report-budget table { min-width: 0 !important; }
 .report-budget th, .report-budget td { padding-left: 6px !important; padding-right: 6px !important; }
 @media print {
-  @page { size: A4; margin: 16mm 14mm; }
-  html { background: white !important; }
-  .report canvas { max-width: 100% !important; }
   .report-charts fieldset { display: none !important; }
   .report-charts figure { break-inside: avoid; }
-  body { background: white !important; }
-  body > div header, body > div footer, .no-print, [href="#main"] { display: none !important; }
-  .report { display: flex !important; }
-  main { max-width: none !important; padding: 0 !important; }
-  .report section { break-inside: avoid-page; }
-  .report table { break-inside: auto; }
-  .report tr { break-inside: avoid; }
-  .report a { color: inherit; text-decoration: none; }
 }`;
-
-const when = (iso: string | null | undefined) => (iso ? `${iso.slice(0, 16).replace('T', ' ')} UTC` : '—');
 
 /** `/missions/:missionId/runs/:runId/report`: a printable review report of a run's budget. */
 export function ReviewReportRoute() {
@@ -73,7 +55,7 @@ function Report({ missionId, runId }: { missionId: string; runId: string }) {
 
   return (
     <article className="report mx-auto flex w-full max-w-[680px] flex-col gap-6">
-      <style>{printCss}</style>
+      <style>{reportPrintCss + runReportCss}</style>
       <title>{`Review report · ${run.data.scenarioName} · Photon Ledger`}</title>
       <div className="no-print flex flex-wrap items-center gap-3">
         <Link to={runPagePath(missionId, runId)} className="text-sm underline decoration-rule-strong underline-offset-2">
@@ -89,7 +71,7 @@ function Report({ missionId, runId }: { missionId: string; runId: string }) {
           {mission.data?.name ?? 'Mission'} — run of {run.data.scenarioName}
         </h1>
         <p className="font-mono text-xs text-ink-soft">
-          run {runId} · finished {when(run.data.finishedAt)} · printed {when(new Date().toISOString())}
+          run {runId} · finished {reportTime(run.data.finishedAt)} · printed {reportTime(new Date().toISOString())}
         </p>
       </div>
       <p role="note" className="border-l-4 border-sodium px-3 py-1 text-sm">
@@ -97,32 +79,7 @@ function Report({ missionId, runId }: { missionId: string; runId: string }) {
         {cautionText}
       </p>
 
-      <ReportSection title="Approval">
-        {review.data ? (
-          <>
-            <dl className="grid grid-cols-[max-content_1fr] gap-x-4 gap-y-1 text-sm">
-              <Term label="State">{reviewStateLabels[review.data.state]}</Term>
-              <Term label="Submitted">{review.data.submittedBy ? `${review.data.submittedBy.displayName}, ${when(review.data.submittedAt)}` : '—'}</Term>
-              <Term label={review.data.state === 'approved' ? 'Approved' : 'Decided'}>{review.data.decidedBy ? `${review.data.decidedBy.displayName}, ${when(review.data.decidedAt)}` : '—'}</Term>
-              {review.data.reason && <Term label="Reason">{review.data.reason}</Term>}
-              {review.data.frozen && (
-                <>
-                  <Term label="Content SHA-256">
-                    <span className="font-mono text-xs break-all">{review.data.frozen.contentHash}</span>
-                  </Term>
-                  <Term label="Still matches">{review.data.intact === false ? 'NO — content changed after approval' : 'yes'}</Term>
-                </>
-              )}
-            </dl>
-            <h3 className="mt-2 text-sm font-semibold">History</h3>
-            <ReviewHistory missionId={missionId} subjectType="budget" subjectId={runId} version={review.data.updatedAt} />
-          </>
-        ) : review.isError ? (
-          <p className="text-sm text-alarm">The review could not be loaded.</p>
-        ) : (
-          <LoadingState label="Loading the review…" />
-        )}
-      </ReportSection>
+      <ApprovalSection missionId={missionId} subjectType="budget" subjectId={runId} review={review.data} failed={review.isError} />
 
       <ReportSection title="Vehicle and scenario">
         {summary.data ? (
@@ -132,7 +89,7 @@ function Report({ missionId, runId }: { missionId: string; runId: string }) {
               <span className="font-mono text-xs">{summary.data.vehicle.revisionId}</span>
             </Term>
             <Term label="Scenario">{summary.data.scenarioName}</Term>
-            <Term label="Epoch">{when(summary.data.epochUtc)}</Term>
+            <Term label="Epoch">{reportTime(summary.data.epochUtc)}</Term>
             <Term label="Span">{`${(summary.data.spanSeconds / 86_400).toLocaleString('en-GB', { maximumSignificantDigits: 4 })} d, output every ${summary.data.outputStepSeconds} s`}</Term>
             <Term label="Frame, central body">{`${summary.data.frame}, ${summary.data.centralBody}`}</Term>
           </dl>
@@ -178,7 +135,7 @@ function Report({ missionId, runId }: { missionId: string; runId: string }) {
               {comments.data.comments.map((c) => (
                 <li key={c.id} className={c.parentId ? 'ml-6 border-l-2 border-rule pl-3' : ''}>
                   <p className="text-xs text-ink-soft">
-                    {c.author?.displayName ?? 'Former member'} · {when(c.createdAt)}
+                    {c.author?.displayName ?? 'Former member'} · {reportTime(c.createdAt)}
                     {c.lineKey ? ` · on ${c.lineKey}` : ''}
                     {c.resolved ? ' · resolved' : ' · open'}
                   </p>
@@ -196,20 +153,4 @@ function Report({ missionId, runId }: { missionId: string; runId: string }) {
   );
 }
 
-function ReportSection({ title, children }: { title: string; children: ReactNode }) {
-  return (
-    <section className="flex flex-col gap-2">
-      <h2 className="text-lg font-semibold">{title}</h2>
-      {children}
-    </section>
-  );
-}
 
-function Term({ label, children }: { label: string; children: ReactNode }) {
-  return (
-    <>
-      <dt className="text-ink-soft">{label}</dt>
-      <dd>{children}</dd>
-    </>
-  );
-}

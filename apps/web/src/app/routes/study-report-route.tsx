@@ -1,4 +1,4 @@
-import { lazy, Suspense, useMemo, type ReactNode } from 'react';
+import { lazy, Suspense, useMemo } from 'react';
 import { Link, useParams } from 'react-router-dom';
 import { studyParamsSchema, type MissionRequirementList, type Study, type StudyStatistics } from '@photon-ledger/shared';
 import { marginPercent, type BudgetComparator } from '@photon-ledger/srp-core';
@@ -11,8 +11,7 @@ import { useComments } from '../../features/comments/api/list-comments';
 import { useMission } from '../../features/missions/api/get-mission';
 import { useRequirements } from '../../features/requirements/api/list-requirements';
 import { useReview } from '../../features/reviews/api/get-review';
-import { ReviewHistory } from '../../features/reviews/components/review-history';
-import { reviewStateLabels } from '../../features/reviews/components/review-state-badge';
+import { ApprovalSection, ReportSection, reportPrintCss, reportTime, Term } from '../../features/reviews/components/report-parts';
 import { isStudyActive, useStudy } from '../../features/studies/api/get-study';
 import { useStudyBest } from '../../features/studies/api/get-study-best';
 import { useStudyCases } from '../../features/studies/api/get-study-cases';
@@ -26,25 +25,7 @@ import { ApiRequestError } from '../../lib/api-client';
 // uPlot stays out of the first bundle.
 const StudyScatter = lazy(() => import('../../features/studies/components/study-scatter'));
 
-/**
- * Print rules: no app chrome, no buttons, black on white, sections kept whole. The report is laid
- * out at most 680 CSS px wide on screen too, so its canvases are drawn at the width of an A4 page
- * (210 mm less 2 × 14 mm margins ≈ 688 px) and print without scaling or clipping.
- */
-const printCss = `
-@media print {
-  @page { size: A4; margin: 16mm 14mm; }
-  html, body { background: white !important; }
-  body > div header, body > div footer, .no-print, [href="#main"] { display: none !important; }
-  main { max-width: none !important; padding: 0 !important; margin: 0 !important; }
-  .report section { break-inside: avoid-page; }
-  .report table { break-inside: auto; }
-  .report tr { break-inside: avoid; }
-  .report a { color: inherit; text-decoration: none; }
-  .report canvas { max-width: 100% !important; }
-}`;
 
-const when = (iso: string | null | undefined) => (iso ? `${iso.slice(0, 16).replace('T', ' ')} UTC` : '—');
 
 /** `/missions/:missionId/studies/:studyId/report`: printable review report of a trade study. */
 export function StudyReportRoute() {
@@ -101,7 +82,7 @@ function ReportBody({ missionId, study }: { missionId: string; study: Study }) {
 
   return (
     <article className="report mx-auto flex w-full max-w-[680px] flex-col gap-6">
-      <style>{printCss}</style>
+      <style>{reportPrintCss}</style>
       <title>{`Study report · ${study.name} · Photon Ledger`}</title>
       <div className="no-print flex flex-wrap items-center gap-3">
         <Link to={studyPagePath(missionId, study.id)} className="text-sm underline decoration-rule-strong underline-offset-2">
@@ -117,7 +98,7 @@ function ReportBody({ missionId, study }: { missionId: string; study: Study }) {
           {mission.data?.name ?? 'Mission'} — {study.name}
         </h1>
         <p className="font-mono text-xs text-ink-soft">
-          study {study.id} · created {when(study.createdAt)} · printed {when(new Date().toISOString())}
+          study {study.id} · created {reportTime(study.createdAt)} · printed {reportTime(new Date().toISOString())}
         </p>
       </div>
       <p role="note" className="border-l-4 border-sodium px-3 py-1 text-sm">
@@ -130,32 +111,7 @@ function ReportBody({ missionId, study }: { missionId: string; study: Study }) {
         </p>
       )}
 
-      <ReportSection title="Approval">
-        {review.data ? (
-          <>
-            <dl className="grid grid-cols-[max-content_1fr] gap-x-4 gap-y-1 text-sm">
-              <Term label="State">{reviewStateLabels[review.data.state]}</Term>
-              <Term label="Submitted">{review.data.submittedBy ? `${review.data.submittedBy.displayName}, ${when(review.data.submittedAt)}` : '—'}</Term>
-              <Term label={review.data.state === 'approved' ? 'Approved' : 'Decided'}>{review.data.decidedBy ? `${review.data.decidedBy.displayName}, ${when(review.data.decidedAt)}` : '—'}</Term>
-              {review.data.reason && <Term label="Reason">{review.data.reason}</Term>}
-              {review.data.frozen && (
-                <>
-                  <Term label="Content SHA-256">
-                    <span className="font-mono text-xs break-all">{review.data.frozen.contentHash}</span>
-                  </Term>
-                  <Term label="Still matches">{review.data.intact === false ? 'NO — content changed after approval' : 'yes'}</Term>
-                </>
-              )}
-            </dl>
-            <h3 className="mt-2 text-sm font-semibold">History</h3>
-            <ReviewHistory missionId={missionId} subjectType="study" subjectId={study.id} version={review.data.updatedAt} />
-          </>
-        ) : review.isError ? (
-          <p className="text-sm text-alarm">The review could not be loaded.</p>
-        ) : (
-          <LoadingState label="Loading the review…" />
-        )}
-      </ReportSection>
+      <ApprovalSection missionId={missionId} subjectType="study" subjectId={study.id} review={review.data} failed={review.isError} />
 
       <ReportSection title="Study definition">
         <dl className="grid grid-cols-[max-content_1fr] gap-x-4 gap-y-1 text-sm">
@@ -295,7 +251,7 @@ function ReportBody({ missionId, study }: { missionId: string; study: Study }) {
               {comments.data.comments.map((c) => (
                 <li key={c.id} className={c.parentId ? 'ml-6 border-l-2 border-rule pl-3' : ''}>
                   <p className="text-xs text-ink-soft">
-                    {c.author?.displayName ?? 'Former member'} · {when(c.createdAt)}
+                    {c.author?.displayName ?? 'Former member'} · {reportTime(c.createdAt)}
                     {c.lineKey ? ` · on ${lineLabel(c.lineKey)}` : ''}
                     {c.resolved ? ' · resolved' : ' · open'}
                   </p>
@@ -381,20 +337,4 @@ function BestRow({ missionId, studyId, line }: { missionId: string; studyId: str
   );
 }
 
-function ReportSection({ title, children }: { title: string; children: ReactNode }) {
-  return (
-    <section className="flex flex-col gap-2">
-      <h2 className="text-lg font-semibold">{title}</h2>
-      {children}
-    </section>
-  );
-}
 
-function Term({ label, children }: { label: string; children: ReactNode }) {
-  return (
-    <>
-      <dt className="text-ink-soft">{label}</dt>
-      <dd>{children}</dd>
-    </>
-  );
-}
