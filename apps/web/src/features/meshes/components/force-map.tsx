@@ -1,7 +1,7 @@
 import { useEffect, useId, useMemo, useRef, useState, type KeyboardEvent, type MouseEvent } from 'react';
 import type { CoefficientTableData } from '@photon-ledger/shared';
 import { forceMagnitudes, nearestNode, nodeAt, paintForceMap, scaleGradient, type TableNode } from '../lib/force-map';
-import { formatNumber, formatVector } from '../lib/format-number';
+import { formatNumber, formatVector } from '../../../lib/format-number';
 import type { MeshSunAngles } from '../lib/sun-angles';
 
 /** Accessible name of the map canvas. */

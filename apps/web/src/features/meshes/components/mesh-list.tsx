@@ -2,7 +2,7 @@ import { Link } from 'react-router-dom';
 import type { MeshFormat, MeshSummary } from '@photon-ledger/shared';
 import { formatUtcDate } from '../../../lib/format';
 import { meshPagePath } from '../api/mesh-paths';
-import { formatNumber, shortSha } from '../lib/format-number';
+import { formatNumber, shortSha } from '../../../lib/format-number';
 
 /** Readable names of the mesh file formats. */
 export const meshFormatLabels: Record<MeshFormat, string> = { obj: 'OBJ', 'stl-ascii': 'STL (ASCII)', 'stl-binary': 'STL (binary)' };

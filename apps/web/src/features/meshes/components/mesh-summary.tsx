@@ -1,7 +1,7 @@
 import type { ReactNode } from 'react';
 import type { MeshSummary } from '@photon-ledger/shared';
 import { formatUtcDate } from '../../../lib/format';
-import { formatNumber, formatVector, shortSha } from '../lib/format-number';
+import { formatNumber, formatVector, shortSha } from '../../../lib/format-number';
 import { boundsText, meshFormatLabels } from './mesh-list';
 
 /** A mesh's facts: file, format, units, transform, counts, area, bounds and checksum. */

@@ -10,7 +10,7 @@ import { useCoefficientTableData } from '../api/get-coefficient-table-data';
 import { useRequestCoefficientTable } from '../api/request-coefficient-table';
 import { useCancelCoefficientTable } from '../api/cancel-coefficient-table';
 import { Button } from '../../../components/ui/button';
-import { formatNumber, shortSha } from '../lib/format-number';
+import { formatNumber, shortSha } from '../../../lib/format-number';
 import { PRESSURE_AT_1AU_PA } from '../lib/pressure';
 import { anglesFromPolar, DEFAULT_MESH_SUN, type MeshSunAngles } from '../lib/sun-angles';
 import { ForceMap } from './force-map';

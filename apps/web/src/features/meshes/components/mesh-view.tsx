@@ -7,7 +7,7 @@ import { createLitClient, SupersededError, type LitClient } from '../lib/lit-cli
 import type { LitResult } from '../lib/lit-fractions';
 import { facetAreas, facetColours, facetPalette, litSummary, sceneArrowColours } from '../lib/facet-colours';
 import { facetNormals } from '../lib/mesh-geometry';
-import { formatNumber, formatVector } from '../lib/format-number';
+import { formatNumber, formatVector } from '../../../lib/format-number';
 import { PRESSURE_AT_1AU_PA } from '../lib/pressure';
 import { DEFAULT_MESH_SUN, sunVector, type MeshSunAngles } from '../lib/sun-angles';
 

@@ -4,7 +4,7 @@ import { materialPresetKeys, meshSamplesPerFacet, meshTableStepsDeg, type MeshSu
 import { materialPresets } from '@photon-ledger/srp-core';
 import { cx } from '../../../lib/cx';
 import { errorsUnder, type FieldErrors } from '../lib/field-errors';
-import { formatNumber } from '../lib/format-number';
+import { formatNumber } from '../../../lib/format-number';
 import { materialPresetLabels, opticsSwatches } from '../lib/optics-palette';
 import {
   emptyMeshGroupOptics,

@@ -3,7 +3,7 @@ import { materialPresetKeys } from '@photon-ledger/shared';
 import { materialPresets } from '@photon-ledger/srp-core';
 import { cx } from '../../../lib/cx';
 import { errorsUnder, plateFieldLabel, type FieldErrors } from '../lib/field-errors';
-import { formatNumber } from '../lib/format-number';
+import { formatNumber } from '../../../lib/format-number';
 import { materialPresetLabels, opticsSwatches } from '../lib/optics-palette';
 import { parseNumber, type FaceDraft, type MaterialPresetKey, type PlateDraft } from '../lib/vehicle-draft';
 import { CellInput, CellSelect } from './fields';

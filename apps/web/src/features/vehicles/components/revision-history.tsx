@@ -5,7 +5,7 @@ import { LoadingState } from '../../../components/ui/loading-state';
 import { formatUtcDate } from '../../../lib/format';
 import { useVehicleCompare } from '../api/compare-vehicle-revisions';
 import { plateFieldLabel } from '../lib/field-errors';
-import { formatNumber } from '../lib/format-number';
+import { formatNumber } from '../../../lib/format-number';
 
 /** Props of RevisionHistory. */
 export interface RevisionHistoryProps {

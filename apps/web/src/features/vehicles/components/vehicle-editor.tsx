@@ -6,7 +6,7 @@ import { ApiRequestError } from '../../../lib/api-client';
 import { cx } from '../../../lib/cx';
 import { editorReducer, initialEditorState } from '../lib/editor-state';
 import { apiFieldErrors, errorFor, errorsOutside, issuesToFieldErrors, type FieldErrors } from '../lib/field-errors';
-import { formatNumber } from '../lib/format-number';
+import { formatNumber } from '../../../lib/format-number';
 import { materialPresetLabels } from '../lib/optics-palette';
 import { previewOf, type SunAngles } from '../lib/srp-preview';
 import { draftToSpec, parseNumber, type PlateDraft, type SailOpticsDraft, type Vec3Draft, type VehicleDraft, type VehicleKind } from '../lib/vehicle-draft';

@@ -1,7 +1,7 @@
 import { Link } from 'react-router-dom';
 import type { VehicleListItem } from '@photon-ledger/shared';
 import { formatUtcDate } from '../../../lib/format';
-import { formatNumber } from '../lib/format-number';
+import { formatNumber } from '../../../lib/format-number';
 
 /** Props of VehicleList. */
 export interface VehicleListProps {

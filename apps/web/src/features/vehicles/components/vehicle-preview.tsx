@@ -1,5 +1,5 @@
 import { Component, lazy, Suspense, useId, type ReactNode } from 'react';
-import { formatNumber, formatVector } from '../lib/format-number';
+import { formatNumber, formatVector } from '../../../lib/format-number';
 import { arrowColours, opticsSwatches, type OpticsSwatchKey } from '../lib/optics-palette';
 import { PRESSURE_AT_1AU_PA, PREVIEW_SOLAR_CONSTANT, type SrpPreview, type SunAngles } from '../lib/srp-preview';
 

@@ -1,5 +1,15 @@
 const superscripts: Record<string, string> = {
-  '-': '⁻', '0': '⁰', '1': '¹', '2': '²', '3': '³', '4': '⁴', '5': '⁵', '6': '⁶', '7': '⁷', '8': '⁸', '9': '⁹',
+  '-': '⁻',
+  '0': '⁰',
+  '1': '¹',
+  '2': '²',
+  '3': '³',
+  '4': '⁴',
+  '5': '⁵',
+  '6': '⁶',
+  '7': '⁷',
+  '8': '⁸',
+  '9': '⁹',
 };
 
 /**
@@ -10,7 +20,9 @@ export function formatNumber(value: number, digits = 4): string {
   if (!Number.isFinite(value)) return '—';
   if (value === 0) return '0';
   const magnitude = Math.abs(value);
-  if (magnitude >= 1e-3 && magnitude < 1e6) return String(Number(value.toPrecision(digits)));
+  if (magnitude >= 1e-3 && magnitude < 1e6) {
+    return String(Number(value.toPrecision(digits)));
+  }
   const [mantissa = '', exponent = ''] = value.toExponential(digits - 1).split('e');
   const power = String(Number(exponent))
     .split('')
