@@ -4,7 +4,7 @@
  */
 import { SrpError } from '../errors';
 import type { ReadonlyVec3, Vec3 } from '../math/vec3';
-import { anyHit, closestHit, createMeshRay, createMeshSweep, sweptPrismMeetsAny } from './mesh-bvh';
+import { anyHit, closestHit, createMeshRay, createMeshSweep, rayHitsRow, sweptPrismMeetsAny } from './mesh-bvh';
 import { BACK_UNSHADOWABLE, FRONT_UNSHADOWABLE, type MeshScene } from './mesh-scene';
 
 /** Options of `illuminateMesh`. */
@@ -40,6 +40,11 @@ export interface MeshIllumination {
    * only, as both the test and the rays are exact.
    */
   readonly sweepHold: Uint8Array;
+  /**
+   * Per facet, the row (in the hierarchy's triangles) that last blocked one of its shadow rays,
+   * or -1: tried first by the next ray (a speed hint only: a hit on it is a hit).
+   */
+  readonly lastBlocker: Int32Array;
 }
 
 /** Allocates an illumination result for `scene` (not for hot paths). */
@@ -51,6 +56,7 @@ export function createMeshIllumination(scene: MeshScene): MeshIllumination {
     rays: 0,
     sweeps: 0,
     sweepHold: new Uint8Array(scene.triangleCount),
+    lastBlocker: new Int32Array(scene.triangleCount).fill(-1),
   };
 }
 
@@ -161,6 +167,7 @@ export function illuminateMesh(
   const triangleIds = bvh.triangleIds;
   const offset = scene.rayOffsetM;
   const lit = out.litFraction;
+  const blockers = out.lastBlocker;
   shadowRay[3] = sx;
   shadowRay[4] = sy;
   shadowRay[5] = sz;
@@ -285,7 +292,12 @@ export function illuminateMesh(
           shadowRay[1] = qy;
           shadowRay[2] = qz;
           rays += 1;
-          if (anyHit(bvh, shadowRay, row)) continue;
+          const cached = blockers[t]!;
+          if (cached >= 0 && rayHitsRow(bvh, shadowRay, cached)) continue;
+          if (anyHit(bvh, shadowRay, row)) {
+            blockers[t] = shadowRay[8]!;
+            continue;
+          }
         }
         litCount += 1;
         px += qx;

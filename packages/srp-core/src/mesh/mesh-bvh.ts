@@ -51,13 +51,13 @@ export interface MeshBvh {
 
 /**
  * The ray of a query, reused: 0-2 origin (m), 3-5 unit direction, 6 maximum distance (m);
- * the closest-hit query writes the hit distance to 7.
+ * the closest-hit query writes the hit distance to 7, the any-hit query the row it met to 8.
  */
 export type MeshRay = Float64Array;
 
 /** A ray buffer for `anyHit` / `closestHit`. */
 export function createMeshRay(): MeshRay {
-  return new Float64Array(8);
+  return new Float64Array(9);
 }
 
 /**
@@ -348,13 +348,56 @@ export function anyHit(bvh: MeshBvh, ray: MeshRay, skipRow: number): boolean {
         const v = (dx * qx + dy * qy + dz * qz) * inv;
         if (v < 0 || u + v > 1) continue;
         const t = (e2x * qx + e2y * qy + e2z * qz) * inv;
-        if (t > 0 && t < tMax) return true;
+        if (t > 0 && t < tMax) {
+          ray[8] = r;
+          return true;
+        }
       }
     }
     if (sp === 0) return false;
     sp -= 1;
     node = stack[sp]!;
   }
+}
+
+/**
+ * Does the ray meet the triangle in row `row` of `bvh.triangles` at a distance in (0, ray[6])?
+ * The same Möller–Trumbore test as `anyHit`, for one triangle: shadow rays first try the triangle
+ * that last shaded their facet (it usually shades the next Sun direction's rays too).
+ */
+export function rayHitsRow(bvh: MeshBvh, ray: MeshRay, row: number): boolean {
+  const tri = bvh.triangles;
+  const ox = ray[0]!;
+  const oy = ray[1]!;
+  const oz = ray[2]!;
+  const dx = ray[3]!;
+  const dy = ray[4]!;
+  const dz = ray[5]!;
+  const q = 9 * row;
+  const e1x = tri[q + 3]!;
+  const e1y = tri[q + 4]!;
+  const e1z = tri[q + 5]!;
+  const e2x = tri[q + 6]!;
+  const e2y = tri[q + 7]!;
+  const e2z = tri[q + 8]!;
+  const px = dy * e2z - dz * e2y;
+  const py = dz * e2x - dx * e2z;
+  const pz = dx * e2y - dy * e2x;
+  const det = e1x * px + e1y * py + e1z * pz;
+  if (det === 0) return false;
+  const inv = 1 / det;
+  const tx = ox - tri[q]!;
+  const ty = oy - tri[q + 1]!;
+  const tz = oz - tri[q + 2]!;
+  const u = (tx * px + ty * py + tz * pz) * inv;
+  if (u < 0 || u > 1) return false;
+  const qx = ty * e1z - tz * e1y;
+  const qy = tz * e1x - tx * e1z;
+  const qz = tx * e1y - ty * e1x;
+  const v = (dx * qx + dy * qy + dz * qz) * inv;
+  if (v < 0 || u + v > 1) return false;
+  const t = (e2x * qx + e2y * qy + e2z * qz) * inv;
+  return t > 0 && t < ray[6]!;
 }
 
 /**
