@@ -2,6 +2,7 @@
  * Developer tool: sign in as a demo user and take a screenshot of a page of a running server.
  *   node --import tsx apps/web/e2e/tools/shoot.ts --base http://127.0.0.1:PORT --role engineer \
  *     --path /missions --out /tmp/shot.png [--wait "text or css"] [--width 1360] [--height 900] [--full]
+ *     [--element 'figure:has-text("Wheel momentum")']   (only that element, a Playwright selector)
  * Prints the browser console errors it saw. Uses Debian's Chromium (software WebGL).
  */
 import { parseArgs } from 'node:util';
@@ -18,6 +19,7 @@ const { values } = parseArgs({
     width: { type: 'string', default: '1360' },
     height: { type: 'string', default: '900' },
     full: { type: 'boolean', default: false },
+    element: { type: 'string' },
   },
 });
 if (!values.base) throw new Error('--base http://127.0.0.1:PORT is required');
@@ -46,7 +48,8 @@ try {
     await page.waitForLoadState('networkidle');
   }
   await page.waitForTimeout(500);
-  await page.screenshot({ path: values.out, fullPage: values.full });
+  if (values.element) await page.locator(values.element).first().screenshot({ path: values.out });
+  else await page.screenshot({ path: values.out, fullPage: values.full });
   console.log(`saved ${values.out}${errors.length ? `\nconsole errors:\n${errors.join('\n')}` : ''}`);
 } finally {
   await close();

@@ -5,6 +5,8 @@ import { cx } from '../../../../lib/cx';
 export const CHART_HEIGHT = 240;
 export const SMALL_CHART_HEIGHT = 190;
 export const LEGEND_ROOM = 40;
+/** Legend room of a chart with many series (two rows of entries on a narrow card). */
+export const TALL_LEGEND_ROOM = 64;
 
 /** Props of ChartFrame. */
 export interface ChartFrameProps {
@@ -15,12 +17,14 @@ export interface ChartFrameProps {
   controls?: ReactNode;
   /** Plot height; the frame keeps this plus the legend's room whatever its content. */
   plotHeight: number;
+  /** Room under the plot for the legend (default LEGEND_ROOM). */
+  legendRoom?: number;
   children: ReactNode;
   className?: string;
 }
 
 /** A chart card of fixed height, so nothing below moves when its data arrives. */
-export function ChartFrame({ title, description, controls, plotHeight, children, className }: ChartFrameProps) {
+export function ChartFrame({ title, description, controls, plotHeight, legendRoom = LEGEND_ROOM, children, className }: ChartFrameProps) {
   return (
     <figure className={cx('flex min-w-0 flex-col gap-2 rounded-lg border border-rule bg-paper-raised p-3 sm:p-4', className)}>
       <div className="flex min-h-9 flex-wrap items-start justify-between gap-2">
@@ -30,7 +34,7 @@ export function ChartFrame({ title, description, controls, plotHeight, children,
         </figcaption>
         {controls}
       </div>
-      <div className="relative overflow-hidden" style={{ height: plotHeight + LEGEND_ROOM }}>
+      <div className="relative overflow-hidden" style={{ height: plotHeight + legendRoom }}>
         {children}
       </div>
     </figure>
@@ -54,7 +58,7 @@ export function ChartsPlaceholder({ withMomentum }: { withMomentum: boolean }) {
   return (
     <div className="flex flex-col gap-4">
       {titles.map((title) => (
-        <ChartFrame key={title} title={title} description=" " plotHeight={CHART_HEIGHT}>
+        <ChartFrame key={title} title={title} description=" " plotHeight={CHART_HEIGHT} legendRoom={title === 'Wheel momentum' ? TALL_LEGEND_ROOM : LEGEND_ROOM}>
           <ChartSkeleton label={`Loading the ${title.toLowerCase()} chart…`} />
         </ChartFrame>
       ))}

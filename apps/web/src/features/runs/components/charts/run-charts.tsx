@@ -8,7 +8,7 @@ import { alignColumns, chooseDisplayUnit, maxAbsOf, unwrapDegrees, type AlignedC
 import type { EclipsePassage } from '../../lib/eclipses';
 import { formatUtc } from '../../lib/format-time';
 import { formatQuantity } from '../../lib/format-number';
-import { CHART_HEIGHT, ChartFrame, ChartSkeleton, SMALL_CHART_HEIGHT } from './chart-frame';
+import { CHART_HEIGHT, ChartFrame, ChartSkeleton, SMALL_CHART_HEIGHT, TALL_LEGEND_ROOM } from './chart-frame';
 import { UPlotChart, type ChartBand, type ChartLine } from './uplot-chart';
 
 /** Props of RunCharts. */
@@ -295,7 +295,7 @@ function MomentumChart({ context }: { context: ChartContext }) {
       }`
     : 'Stored wheel momentum H = ∫τ dt in body axes';
   return (
-    <ChartFrame title="Wheel momentum" description={description} plotHeight={CHART_HEIGHT}>
+    <ChartFrame title="Wheel momentum" description={description} plotHeight={CHART_HEIGHT} legendRoom={TALL_LEGEND_ROOM}>
       <SeriesState query={query} what="momentum chart">
         {() =>
           prepared && (
