@@ -265,147 +265,11 @@ function finishBvh(
 }
 
 /**
- * Whether the ray hits any triangle other than row `skipRow` at a distance in (0, ray[6]).
- * Returns at the first hit found (shadow rays need no nearest one). Triangles block from both
- * sides. Allocates nothing.
- * @param ray origin, unit direction, maximum distance (`createMeshRay`)
- * @param skipRow a row of `bvh.triangles` to ignore (the facet the ray leaves), or -1
+ * The hierarchy walk behind `anyHit` and `closestHit`: slab tests on the node boxes, the
+ * Möller–Trumbore test on the leaves' rows. `firstHit` returns at the first row met (recording it
+ * in ray[8]); otherwise the nearest row, its distance in ray[7]. -1 when nothing is met.
  */
-export function anyHit(bvh: MeshBvh, ray: MeshRay, skipRow: number): boolean {
-  const ox = ray[0]!;
-  const oy = ray[1]!;
-  const oz = ray[2]!;
-  const dx = ray[3]!;
-  const dy = ray[4]!;
-  const dz = ray[5]!;
-  const tMax = ray[6]!;
-  // A zero component would make 0 · ∞ = NaN in the slab test for an origin on a box face.
-  const ix = 1 / (dx === 0 ? 1e-300 : dx);
-  const iy = 1 / (dy === 0 ? 1e-300 : dy);
-  const iz = 1 / (dz === 0 ? 1e-300 : dz);
-  const b = bvh.bounds;
-  const nodes = bvh.nodes;
-  const tri = bvh.triangles;
-  const stack = bvh.stack;
-  let sp = 0;
-  let node = 0;
-  for (;;) {
-    const o = 6 * node;
-    let t1 = (b[o]! - ox) * ix;
-    let t2 = (b[o + 3]! - ox) * ix;
-    let tNear = t1 < t2 ? t1 : t2;
-    let tFar = t1 < t2 ? t2 : t1;
-    t1 = (b[o + 1]! - oy) * iy;
-    t2 = (b[o + 4]! - oy) * iy;
-    if (t1 > t2) {
-      const s = t1;
-      t1 = t2;
-      t2 = s;
-    }
-    if (t1 > tNear) tNear = t1;
-    if (t2 < tFar) tFar = t2;
-    t1 = (b[o + 2]! - oz) * iz;
-    t2 = (b[o + 5]! - oz) * iz;
-    if (t1 > t2) {
-      const s = t1;
-      t1 = t2;
-      t2 = s;
-    }
-    if (t1 > tNear) tNear = t1;
-    if (t2 < tFar) tFar = t2;
-    if (tFar >= tNear && tFar >= 0 && tNear <= tMax) {
-      const count = nodes[2 * node + 1]!;
-      if (count === 0) {
-        stack[sp] = nodes[2 * node]!;
-        sp += 1;
-        node += 1;
-        continue;
-      }
-      const first = nodes[2 * node]!;
-      for (let r = first, end = first + count; r < end; r += 1) {
-        if (r === skipRow) continue;
-        const q = 9 * r;
-        const e1x = tri[q + 3]!;
-        const e1y = tri[q + 4]!;
-        const e1z = tri[q + 5]!;
-        const e2x = tri[q + 6]!;
-        const e2y = tri[q + 7]!;
-        const e2z = tri[q + 8]!;
-        const px = dy * e2z - dz * e2y;
-        const py = dz * e2x - dx * e2z;
-        const pz = dx * e2y - dy * e2x;
-        const det = e1x * px + e1y * py + e1z * pz;
-        if (det === 0) continue; // ray in the triangle's plane: no crossing
-        const inv = 1 / det;
-        const tx = ox - tri[q]!;
-        const ty = oy - tri[q + 1]!;
-        const tz = oz - tri[q + 2]!;
-        const u = (tx * px + ty * py + tz * pz) * inv;
-        if (u < 0 || u > 1) continue;
-        const qx = ty * e1z - tz * e1y;
-        const qy = tz * e1x - tx * e1z;
-        const qz = tx * e1y - ty * e1x;
-        const v = (dx * qx + dy * qy + dz * qz) * inv;
-        if (v < 0 || u + v > 1) continue;
-        const t = (e2x * qx + e2y * qy + e2z * qz) * inv;
-        if (t > 0 && t < tMax) {
-          ray[8] = r;
-          return true;
-        }
-      }
-    }
-    if (sp === 0) return false;
-    sp -= 1;
-    node = stack[sp]!;
-  }
-}
-
-/**
- * Does the ray meet the triangle in row `row` of `bvh.triangles` at a distance in (0, ray[6])?
- * The same Möller–Trumbore test as `anyHit`, for one triangle: shadow rays first try the triangle
- * that last shaded their facet (it usually shades the next Sun direction's rays too).
- */
-export function rayHitsRow(bvh: MeshBvh, ray: MeshRay, row: number): boolean {
-  const tri = bvh.triangles;
-  const ox = ray[0]!;
-  const oy = ray[1]!;
-  const oz = ray[2]!;
-  const dx = ray[3]!;
-  const dy = ray[4]!;
-  const dz = ray[5]!;
-  const q = 9 * row;
-  const e1x = tri[q + 3]!;
-  const e1y = tri[q + 4]!;
-  const e1z = tri[q + 5]!;
-  const e2x = tri[q + 6]!;
-  const e2y = tri[q + 7]!;
-  const e2z = tri[q + 8]!;
-  const px = dy * e2z - dz * e2y;
-  const py = dz * e2x - dx * e2z;
-  const pz = dx * e2y - dy * e2x;
-  const det = e1x * px + e1y * py + e1z * pz;
-  if (det === 0) return false;
-  const inv = 1 / det;
-  const tx = ox - tri[q]!;
-  const ty = oy - tri[q + 1]!;
-  const tz = oz - tri[q + 2]!;
-  const u = (tx * px + ty * py + tz * pz) * inv;
-  if (u < 0 || u > 1) return false;
-  const qx = ty * e1z - tz * e1y;
-  const qy = tz * e1x - tx * e1z;
-  const qz = tx * e1y - ty * e1x;
-  const v = (dx * qx + dy * qy + dz * qz) * inv;
-  if (v < 0 || u + v > 1) return false;
-  const t = (e2x * qx + e2y * qy + e2z * qz) * inv;
-  return t > 0 && t < ray[6]!;
-}
-
-/**
- * The nearest triangle (other than row `skipRow`) the ray hits at a distance in (0, ray[6]);
- * writes the distance to ray[7]. Allocates nothing.
- * @returns the row in `bvh.triangles` (`bvh.triangleIds[row]` is the mesh triangle), or -1
- */
-export function closestHit(bvh: MeshBvh, ray: MeshRay, skipRow: number): number {
+function traverse(bvh: MeshBvh, ray: MeshRay, skipRow: number, firstHit: boolean): number {
   const ox = ray[0]!;
   const oy = ray[1]!;
   const oz = ray[2]!;
@@ -413,6 +277,7 @@ export function closestHit(bvh: MeshBvh, ray: MeshRay, skipRow: number): number 
   const dy = ray[4]!;
   const dz = ray[5]!;
   let tMax = ray[6]!;
+  // A zero component would make 0 · ∞ = NaN in the slab test for an origin on a box face.
   const ix = 1 / (dx === 0 ? 1e-300 : dx);
   const iy = 1 / (dy === 0 ? 1e-300 : dy);
   const iz = 1 / (dz === 0 ? 1e-300 : dz);
@@ -458,31 +323,12 @@ export function closestHit(bvh: MeshBvh, ray: MeshRay, skipRow: number): number 
       const first = nodes[2 * node]!;
       for (let r = first, end = first + count; r < end; r += 1) {
         if (r === skipRow) continue;
-        const q = 9 * r;
-        const e1x = tri[q + 3]!;
-        const e1y = tri[q + 4]!;
-        const e1z = tri[q + 5]!;
-        const e2x = tri[q + 6]!;
-        const e2y = tri[q + 7]!;
-        const e2z = tri[q + 8]!;
-        const px = dy * e2z - dz * e2y;
-        const py = dz * e2x - dx * e2z;
-        const pz = dx * e2y - dy * e2x;
-        const det = e1x * px + e1y * py + e1z * pz;
-        if (det === 0) continue;
-        const inv = 1 / det;
-        const tx = ox - tri[q]!;
-        const ty = oy - tri[q + 1]!;
-        const tz = oz - tri[q + 2]!;
-        const u = (tx * px + ty * py + tz * pz) * inv;
-        if (u < 0 || u > 1) continue;
-        const qx = ty * e1z - tz * e1y;
-        const qy = tz * e1x - tx * e1z;
-        const qz = tx * e1y - ty * e1x;
-        const v = (dx * qx + dy * qy + dz * qz) * inv;
-        if (v < 0 || u + v > 1) continue;
-        const t = (e2x * qx + e2y * qy + e2z * qz) * inv;
-        if (t > 0 && t < tMax) {
+        const t = rowHitDistance(tri, ray, r);
+        if (t < tMax) {
+          if (firstHit) {
+            ray[8] = r;
+            return r;
+          }
           tMax = t;
           best = r;
         }
@@ -492,9 +338,74 @@ export function closestHit(bvh: MeshBvh, ray: MeshRay, skipRow: number): number 
     sp -= 1;
     node = stack[sp]!;
   }
-  ray[7] = tMax;
+  if (!firstHit) ray[7] = tMax;
   return best;
 }
+
+/**
+ * Whether the ray hits any triangle other than row `skipRow` at a distance in (0, ray[6]).
+ * Returns at the first hit found (shadow rays need no nearest one). Triangles block from both
+ * sides. Allocates nothing.
+ * @param ray origin, unit direction, maximum distance (`createMeshRay`)
+ * @param skipRow a row of `bvh.triangles` to ignore (the facet the ray leaves), or -1
+ */
+export function anyHit(bvh: MeshBvh, ray: MeshRay, skipRow: number): boolean {
+  return traverse(bvh, ray, skipRow, true) >= 0;
+}
+
+/**
+ * The nearest triangle (other than row `skipRow`) the ray hits at a distance in (0, ray[6]);
+ * writes the distance to ray[7]. Allocates nothing.
+ * @returns the row in `bvh.triangles` (`bvh.triangleIds[row]` is the mesh triangle), or -1
+ */
+export function closestHit(bvh: MeshBvh, ray: MeshRay, skipRow: number): number {
+  return traverse(bvh, ray, skipRow, false);
+}
+
+/**
+ * Distance along the ray to the triangle in row `row` of `bvh.triangles`, or Infinity when the ray
+ * misses it or meets it at t ≤ 0: the Möller–Trumbore test every query here uses.
+ */
+function rowHitDistance(tri: Float64Array, ray: MeshRay, row: number): number {
+  const dx = ray[3]!;
+  const dy = ray[4]!;
+  const dz = ray[5]!;
+  const q = 9 * row;
+  const e1x = tri[q + 3]!;
+  const e1y = tri[q + 4]!;
+  const e1z = tri[q + 5]!;
+  const e2x = tri[q + 6]!;
+  const e2y = tri[q + 7]!;
+  const e2z = tri[q + 8]!;
+  const px = dy * e2z - dz * e2y;
+  const py = dz * e2x - dx * e2z;
+  const pz = dx * e2y - dy * e2x;
+  const det = e1x * px + e1y * py + e1z * pz;
+  if (det === 0) return Infinity; // ray in the triangle's plane: no crossing
+  const inv = 1 / det;
+  const tx = ray[0]! - tri[q]!;
+  const ty = ray[1]! - tri[q + 1]!;
+  const tz = ray[2]! - tri[q + 2]!;
+  const u = (tx * px + ty * py + tz * pz) * inv;
+  if (u < 0 || u > 1) return Infinity;
+  const qx = ty * e1z - tz * e1y;
+  const qy = tz * e1x - tx * e1z;
+  const qz = tx * e1y - ty * e1x;
+  const v = (dx * qx + dy * qy + dz * qz) * inv;
+  if (v < 0 || u + v > 1) return Infinity;
+  const t = (e2x * qx + e2y * qy + e2z * qz) * inv;
+  return t > 0 ? t : Infinity;
+}
+
+/**
+ * Does the ray meet the triangle in row `row` of `bvh.triangles` at a distance in (0, ray[6])?
+ * Shadow rays first try the triangle that last shaded their facet (it usually shades the next Sun
+ * direction's rays too).
+ */
+export function rayHitsRow(bvh: MeshBvh, ray: MeshRay, row: number): boolean {
+  return rowHitDistance(bvh.triangles, ray, row) < ray[6]!;
+}
+
 
 /**
  * Whether any vertex of the mesh lies more than `tolerance` in front of the plane n · p = d
