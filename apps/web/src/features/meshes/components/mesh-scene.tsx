@@ -1,8 +1,9 @@
 import { useEffect, useLayoutEffect, useMemo, useRef, useState } from 'react';
 import { Canvas, useThree } from '@react-three/fiber';
-import { Html, OrbitControls } from '@react-three/drei';
+import { OrbitControls } from '@react-three/drei';
 import { sceneArrowColours as axisColours } from '../lib/facet-colours';
-import { BufferAttribute, BufferGeometry, Color, DoubleSide, EdgesGeometry, Quaternion, SRGBColorSpace, Vector3 } from 'three';
+import { BufferAttribute, BufferGeometry, Color, DoubleSide, EdgesGeometry, SRGBColorSpace, Vector3 } from 'three';
+import { Arrow, AxisLabel } from '../../../components/three/scene-arrows';
 
 /*
  * The 3D view of a mesh (three + @react-three/fiber, loaded lazily): the triangles as they are in
@@ -27,8 +28,6 @@ export interface MeshSceneProps {
 }
 
 type V3 = readonly [number, number, number];
-const Y_AXIS = new Vector3(0, 1, 0);
-
 
 function frameOf(positions: Float32Array): { centre: V3; radius: number } {
   if (positions.length === 0) return { centre: [0, 0, 0], radius: 1 };
@@ -49,37 +48,6 @@ function frameOf(positions: Float32Array): { centre: V3; radius: number } {
   const centre: V3 = [(min[0]! + max[0]!) / 2, (min[1]! + max[1]!) / 2, (min[2]! + max[2]!) / 2];
   const radius = Math.max(1e-3, Math.hypot(max[0]! - min[0]!, max[1]! - min[1]!, max[2]! - min[2]!) / 2);
   return { centre, radius };
-}
-
-function Arrow({ origin, vector, length, colour, radius }: { origin: V3; vector: V3; length: number; colour: string; radius: number }) {
-  const quaternion = useMemo(() => {
-    const dir = new Vector3(...vector);
-    if (dir.lengthSq() === 0) return new Quaternion();
-    return new Quaternion().setFromUnitVectors(Y_AXIS, dir.normalize());
-  }, [vector]);
-  if (!(length > 0)) return null;
-  const head = Math.min(length * 0.3, radius * 7);
-  const shaft = Math.max(length - head, 0);
-  return (
-    <group position={[origin[0], origin[1], origin[2]]} quaternion={quaternion}>
-      <mesh position={[0, shaft / 2, 0]}>
-        <cylinderGeometry args={[radius, radius, shaft, 10]} />
-        <meshBasicMaterial color={colour} />
-      </mesh>
-      <mesh position={[0, shaft + head / 2, 0]}>
-        <coneGeometry args={[radius * 2.6, head, 14]} />
-        <meshBasicMaterial color={colour} />
-      </mesh>
-    </group>
-  );
-}
-
-function AxisLabel({ position, text }: { position: V3; text: string }) {
-  return (
-    <Html center position={[position[0], position[1], position[2]]} style={{ pointerEvents: 'none' }}>
-      <span className="font-mono text-[11px] text-ink-soft">{text}</span>
-    </Html>
-  );
 }
 
 /** Puts the camera on the mesh once (and when the mesh changes), looking at its centre with +z up. */
@@ -157,9 +125,9 @@ function SceneContent({ positions, colours, sunDir, edges }: Omit<MeshSceneProps
       <OrbitControls makeDefault enableDamping={false} />
       <MeshBody positions={positions} colours={colours} edges={edges} />
 
-      <Arrow origin={[0, 0, 0]} vector={[1, 0, 0]} length={axisLength} colour={axisColours.x} radius={thin * 0.7} />
-      <Arrow origin={[0, 0, 0]} vector={[0, 1, 0]} length={axisLength} colour={axisColours.y} radius={thin * 0.7} />
-      <Arrow origin={[0, 0, 0]} vector={[0, 0, 1]} length={axisLength} colour={axisColours.z} radius={thin * 0.7} />
+      <Arrow origin={[0, 0, 0]} direction={[1, 0, 0]} length={axisLength} colour={axisColours.x} radius={thin * 0.7} />
+      <Arrow origin={[0, 0, 0]} direction={[0, 1, 0]} length={axisLength} colour={axisColours.y} radius={thin * 0.7} />
+      <Arrow origin={[0, 0, 0]} direction={[0, 0, 1]} length={axisLength} colour={axisColours.z} radius={thin * 0.7} />
       <AxisLabel position={[axisLength * 1.15, 0, 0]} text="x" />
       <AxisLabel position={[0, axisLength * 1.15, 0]} text="y" />
       <AxisLabel position={[0, 0, axisLength * 1.15]} text="z" />
@@ -169,7 +137,7 @@ function SceneContent({ positions, colours, sunDir, edges }: Omit<MeshSceneProps
         <sphereGeometry args={[radius * 0.07, 20, 14]} />
         <meshBasicMaterial color={axisColours.sun} />
       </mesh>
-      <Arrow origin={sunStart} vector={[-sunDir[0], -sunDir[1], -sunDir[2]]} length={radius * 0.5} colour={axisColours.sun} radius={thin * 1.2} />
+      <Arrow origin={sunStart} direction={[-sunDir[0], -sunDir[1], -sunDir[2]]} length={radius * 0.5} colour={axisColours.sun} radius={thin * 1.2} />
     </>
   );
 }

@@ -4,6 +4,7 @@ import { Edges, Html, OrbitControls } from '@react-three/drei';
 import { DoubleSide, Matrix4, Quaternion, Vector3, BackSide, FrontSide } from 'three';
 import type { PreviewSurface, SrpPreview } from '../lib/srp-preview';
 import { arrowColours, opticsSwatches } from '../lib/optics-palette';
+import { Arrow, AxisLabel } from '../../../components/three/scene-arrows';
 
 /*
  * The 3D view of a vehicle (three + @react-three/fiber, loaded lazily). The body frame is drawn
@@ -26,7 +27,6 @@ export interface VehicleSceneProps {
 
 type V3 = readonly [number, number, number];
 
-const Y_AXIS = new Vector3(0, 1, 0);
 const length = (v: V3) => Math.hypot(v[0], v[1], v[2]);
 
 /** Where the vehicle is and how big: the centre of its surfaces' bounding box and a radius (m). */
@@ -63,29 +63,6 @@ function plateQuaternion(normal: V3, up: V3 | null): Quaternion {
   const y = ref.sub(z.clone().multiplyScalar(ref.dot(z))).normalize();
   const x = new Vector3().crossVectors(y, z).normalize();
   return new Quaternion().setFromRotationMatrix(new Matrix4().makeBasis(x, y, z));
-}
-
-function Arrow({ origin, vector, length: len, colour, radius }: { origin: V3; vector: V3; length: number; colour: string; radius: number }) {
-  const quaternion = useMemo(() => {
-    const dir = new Vector3(...vector);
-    if (dir.lengthSq() === 0) return new Quaternion();
-    return new Quaternion().setFromUnitVectors(Y_AXIS, dir.normalize());
-  }, [vector]);
-  if (!(len > 0) || length(vector) === 0) return null;
-  const head = Math.min(len * 0.35, radius * 6);
-  const shaft = Math.max(len - head, 0);
-  return (
-    <group position={[origin[0], origin[1], origin[2]]} quaternion={quaternion}>
-      <mesh position={[0, shaft / 2, 0]}>
-        <cylinderGeometry args={[radius, radius, shaft, 10]} />
-        <meshBasicMaterial color={colour} />
-      </mesh>
-      <mesh position={[0, shaft + head / 2, 0]}>
-        <coneGeometry args={[radius * 2.6, head, 14]} />
-        <meshBasicMaterial color={colour} />
-      </mesh>
-    </group>
-  );
 }
 
 function Plate({
@@ -129,14 +106,6 @@ function Plate({
         </Html>
       )}
     </group>
-  );
-}
-
-function AxisLabel({ position, text }: { position: V3; text: string }) {
-  return (
-    <Html center position={[position[0], position[1], position[2]]} style={{ pointerEvents: 'none' }}>
-      <span className="font-mono text-[11px] text-ink-soft">{text}</span>
-    </Html>
   );
 }
 
@@ -192,9 +161,9 @@ function SceneContent({ preview, onHoverPlate, highlighted }: Omit<VehicleSceneP
       <OrbitControls makeDefault enableDamping={false} />
 
       {/* body axes at the origin */}
-      <Arrow origin={[0, 0, 0]} vector={[1, 0, 0]} length={axisLength} colour="#9a4a3c" radius={thin * 0.6} />
-      <Arrow origin={[0, 0, 0]} vector={[0, 1, 0]} length={axisLength} colour="#4d5e43" radius={thin * 0.6} />
-      <Arrow origin={[0, 0, 0]} vector={[0, 0, 1]} length={axisLength} colour="#2e4a7a" radius={thin * 0.6} />
+      <Arrow origin={[0, 0, 0]} direction={[1, 0, 0]} length={axisLength} colour="#9a4a3c" radius={thin * 0.6} />
+      <Arrow origin={[0, 0, 0]} direction={[0, 1, 0]} length={axisLength} colour="#4d5e43" radius={thin * 0.6} />
+      <Arrow origin={[0, 0, 0]} direction={[0, 0, 1]} length={axisLength} colour="#2e4a7a" radius={thin * 0.6} />
       <AxisLabel position={[axisLength * 1.15, 0, 0]} text="x" />
       <AxisLabel position={[0, axisLength * 1.15, 0]} text="y" />
       <AxisLabel position={[0, 0, axisLength * 1.15]} text="z" />
@@ -206,7 +175,7 @@ function SceneContent({ preview, onHoverPlate, highlighted }: Omit<VehicleSceneP
       </mesh>
       <Arrow
         origin={[sunPosition[0], sunPosition[1], sunPosition[2]]}
-        vector={[-sun[0], -sun[1], -sun[2]]}
+        direction={[-sun[0], -sun[1], -sun[2]]}
         length={radius * 0.45}
         colour={arrowColours.sun}
         radius={thin}
@@ -227,9 +196,9 @@ function SceneContent({ preview, onHoverPlate, highlighted }: Omit<VehicleSceneP
           {preview.kind !== 'cannonball' &&
             preview.surfaces.map((s, i) => (
               <group key={`arrows-${s.name}-${i}`}>
-                <Arrow origin={s.centroidM} vector={s.normal} length={Math.max(Math.sqrt(s.areaM2) * 0.35, radius * 0.08)} colour={arrowColours.normal} radius={thin * 0.7} />
+                <Arrow origin={s.centroidM} direction={s.normal} length={Math.max(Math.sqrt(s.areaM2) * 0.35, radius * 0.08)} colour={arrowColours.normal} radius={thin * 0.7} />
                 {preview.kind === 'plates' && (
-                  <Arrow origin={s.centroidM} vector={s.forceN} length={length(s.forceN) * forceScale} colour={arrowColours.plateForce} radius={thin} />
+                  <Arrow origin={s.centroidM} direction={s.forceN} length={length(s.forceN) * forceScale} colour={arrowColours.plateForce} radius={thin} />
                 )}
               </group>
             ))}
@@ -238,8 +207,8 @@ function SceneContent({ preview, onHoverPlate, highlighted }: Omit<VehicleSceneP
             <sphereGeometry args={[radius * 0.035, 16, 12]} />
             <meshBasicMaterial color="#10282c" />
           </mesh>
-          <Arrow origin={com} vector={preview.forceN} length={length(preview.forceN) * forceScale} colour={arrowColours.totalForce} radius={thin * 1.6} />
-          <Arrow origin={com} vector={preview.torqueNm} length={torque > 0 ? radius * 0.6 : 0} colour={arrowColours.torque} radius={thin * 1.3} />
+          <Arrow origin={com} direction={preview.forceN} length={length(preview.forceN) * forceScale} colour={arrowColours.totalForce} radius={thin * 1.6} />
+          <Arrow origin={com} direction={preview.torqueNm} length={torque > 0 ? radius * 0.6 : 0} colour={arrowColours.torque} radius={thin * 1.3} />
         </>
       )}
     </>
