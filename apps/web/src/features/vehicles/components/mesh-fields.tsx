@@ -1,20 +1,16 @@
-import { useId, type ReactNode } from 'react';
+import { useId } from 'react';
 import { Link } from 'react-router-dom';
-import { materialPresetKeys, meshSamplesPerFacet, meshTableStepsDeg, type MeshSummary } from '@photon-ledger/shared';
-import { materialPresets } from '@photon-ledger/srp-core';
+import { meshSamplesPerFacet, meshTableStepsDeg, type MeshSummary } from '@photon-ledger/shared';
 import { cx } from '../../../lib/cx';
 import { errorsUnder, type FieldErrors } from '../lib/field-errors';
 import { formatNumber } from '../../../lib/format-number';
-import { materialPresetLabels, opticsSwatches } from '../lib/optics-palette';
 import {
   emptyMeshGroupOptics,
-  parseNumber,
   type FaceDraft,
-  type MaterialPresetKey,
   type MeshDraft,
   type MeshGroupOpticsDraft,
 } from '../lib/vehicle-draft';
-import { CellInput, CellSelect } from './fields';
+import { FaceSelect, FractionCells, fractionSumText, type FractionKey } from './optics-fields';
 
 /*
  * The mesh kind of the editor: which imported mesh, the optics of its facet groups (a default for
@@ -356,6 +352,7 @@ function GroupOpticsEditor({
         <FaceSelect
           label={`${label} front optics`}
           visibleLabel="front"
+          className="w-[9rem]"
           face={optics.front}
           allowNone={false}
           readOnly={readOnly}
@@ -366,6 +363,7 @@ function GroupOpticsEditor({
         <FaceSelect
           label={`${label} back optics`}
           visibleLabel="back"
+          className="w-[9rem]"
           face={optics.back}
           allowNone
           readOnly={readOnly}
@@ -411,76 +409,6 @@ function GroupOpticsEditor({
   );
 }
 
-const fractionText = (n: number) => String(Number(n.toPrecision(6)));
-
-function FaceSelect({
-  label,
-  visibleLabel,
-  face,
-  allowNone,
-  readOnly,
-  onChange,
-  invalid,
-  describedBy,
-}: {
-  label: string;
-  visibleLabel: ReactNode;
-  face: FaceDraft;
-  allowNone: boolean;
-  readOnly: boolean;
-  onChange: (face: FaceDraft) => void;
-  invalid: boolean;
-  describedBy: string | undefined;
-}) {
-  const value = face.mode === 'preset' ? face.preset : face.mode;
-  const swatch = opticsSwatches[face.mode === 'preset' ? face.preset : face.mode === 'custom' ? 'custom' : 'none'];
-  return (
-    <div className="flex items-center gap-1.5">
-      <span aria-hidden="true" className="w-9 text-xs text-ink-soft">
-        {visibleLabel}
-      </span>
-      <span aria-hidden="true" className="size-3 shrink-0 rounded-sm border border-ink/30" style={{ backgroundColor: swatch.colour }} />
-      <CellSelect
-        label={label}
-        value={value}
-        readOnly={readOnly}
-        invalid={invalid}
-        describedBy={describedBy}
-        className="w-[9rem]"
-        onChange={(next) => {
-          if (next === 'none') return onChange({ ...face, mode: 'none' });
-          if (next === 'custom') {
-            const empty = face.absorbed === '' && face.specular === '' && face.diffuse === '';
-            const from = materialPresets[face.preset];
-            return onChange(
-              empty
-                ? { ...face, mode: 'custom', absorbed: fractionText(from.absorbed), specular: fractionText(from.specular), diffuse: fractionText(from.diffuse) }
-                : { ...face, mode: 'custom' },
-            );
-          }
-          onChange({ ...face, mode: 'preset', preset: next as MaterialPresetKey });
-        }}
-      >
-        {allowNone && <option value="none">None</option>}
-        {materialPresetKeys.map((key) => (
-          <option key={key} value={key}>
-            {materialPresetLabels[key]}
-          </option>
-        ))}
-        <option value="custom">Custom</option>
-      </CellSelect>
-    </div>
-  );
-}
-
-const fractionFields = [
-  ['absorbed', 'absorbed'],
-  ['specular', 'specular'],
-  ['diffuse', 'diffuse'],
-  ['emissivityFront', 'ε front'],
-  ['emissivityBack', 'ε back'],
-] as const;
-
 function FractionInputs({
   label,
   messages,
@@ -499,9 +427,8 @@ function FractionInputs({
   errors: FieldErrors;
   readOnly: boolean;
   onVisit: (path: string) => void;
-  onChange: (key: (typeof fractionFields)[number][0], value: string) => void;
+  onChange: (key: FractionKey, value: string) => void;
 }) {
-  const sum = parseNumber(face.absorbed) + parseNumber(face.specular) + parseNumber(face.diffuse);
   const messageId = useId();
   return (
     <fieldset className="flex flex-col gap-1 rounded-md bg-paper-sunk/50 px-2 py-1.5">
@@ -512,33 +439,20 @@ function FractionInputs({
         </p>
       ) : (
         <p aria-hidden="true" className="min-h-4 text-xs text-ink-soft">
-          {label} fractions <span className="font-mono">(sum {Number.isFinite(sum) ? formatNumber(sum, 4) : '—'}; ε optional)</span>
+          {label} fractions <span className="font-mono">{fractionSumText(face)}</span>
         </p>
       )}
-      <div className="flex flex-wrap items-center gap-1.5">
-        {fractionFields.map(([key, short]) => {
-          const isEmissivity = key === 'emissivityFront' || key === 'emissivityBack';
-          const fieldPath = `${path}.${key}`;
-          const invalid = errors[fieldPath] !== undefined || (!isEmissivity && errors[path] !== undefined);
-          return (
-            <label key={key} className="flex items-center gap-1">
-              <span aria-hidden="true" className="text-xs text-ink-soft">
-                {short}
-              </span>
-              <CellInput
-                label={isEmissivity ? `${label} emissivity ${key === 'emissivityFront' ? 'front' : 'back'}` : `${label} ${key} fraction`}
-                value={face[key]}
-                onChange={(v) => onChange(key, v)}
-                onBlur={() => onVisit(fieldPath)}
-                readOnly={readOnly}
-                invalid={invalid}
-                describedBy={messageId}
-                className="w-[3.75rem]"
-              />
-            </label>
-          );
+      <FractionCells
+        face={face}
+        readOnly={readOnly}
+        labelOf={(key, isEmissivity) => (isEmissivity ? `${label} emissivity ${key === 'emissivityFront' ? 'front' : 'back'}` : `${label} ${key} fraction`)}
+        stateOf={(key, isEmissivity) => ({
+          invalid: errors[`${path}.${key}`] !== undefined || (!isEmissivity && errors[path] !== undefined),
+          describedBy: messageId,
         })}
-      </div>
+        onVisit={(key) => onVisit(`${path}.${key}`)}
+        onChange={onChange}
+      />
     </fieldset>
   );
 }

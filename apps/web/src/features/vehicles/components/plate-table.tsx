@@ -1,12 +1,9 @@
 import { useId } from 'react';
-import { materialPresetKeys } from '@photon-ledger/shared';
-import { materialPresets } from '@photon-ledger/srp-core';
 import { cx } from '../../../lib/cx';
 import { errorsUnder, plateFieldLabel, type FieldErrors } from '../lib/field-errors';
-import { formatNumber } from '../../../lib/format-number';
-import { materialPresetLabels, opticsSwatches } from '../lib/optics-palette';
-import { parseNumber, type FaceDraft, type MaterialPresetKey, type PlateDraft } from '../lib/vehicle-draft';
-import { CellInput, CellSelect } from './fields';
+import { type FaceDraft, type PlateDraft } from '../lib/vehicle-draft';
+import { CellInput } from './fields';
+import { FaceSelect, FractionCells, fractionSumText, type FractionKey } from './optics-fields';
 
 /** Props of PlateTable. */
 export interface PlateTableProps {
@@ -347,82 +344,6 @@ function PlateRows({ plate, index, idPrefix, errors, readOnly, onChange, onVisit
 }
 
 /** Value of the face select: 'none', 'custom' or a preset name. */
-function faceValue(face: FaceDraft): string {
-  return face.mode === 'preset' ? face.preset : face.mode;
-}
-
-const fractionText = (n: number) => String(Number(n.toPrecision(6)));
-
-function FaceSelect({
-  label,
-  face,
-  allowNone,
-  readOnly,
-  onChange,
-  invalid,
-  describedBy,
-}: {
-  label: string;
-  face: FaceDraft;
-  allowNone: boolean;
-  readOnly: boolean;
-  onChange: (face: FaceDraft) => void;
-  invalid: boolean;
-  describedBy: string | undefined;
-}) {
-  const value = faceValue(face);
-  const swatch = opticsSwatches[face.mode === 'preset' ? face.preset : face.mode === 'custom' ? 'custom' : 'none'];
-  return (
-    <div className="flex items-center gap-1.5">
-      <span aria-hidden="true" className="size-3 shrink-0 rounded-sm border border-ink/30" style={{ backgroundColor: swatch.colour }} />
-      <CellSelect
-        label={label}
-        value={value}
-        readOnly={readOnly}
-        invalid={invalid}
-        describedBy={describedBy}
-        className="w-[8.5rem]"
-        onChange={(next) => {
-          if (next === 'none') return onChange({ ...face, mode: 'none' });
-          if (next === 'custom') {
-            // Start the fractions from the preset that was chosen, so a small change is a small edit.
-            const empty = face.absorbed === '' && face.specular === '' && face.diffuse === '';
-            const from = materialPresets[face.preset];
-            return onChange(
-              empty
-                ? {
-                    ...face,
-                    mode: 'custom',
-                    absorbed: fractionText(from.absorbed),
-                    specular: fractionText(from.specular),
-                    diffuse: fractionText(from.diffuse),
-                  }
-                : { ...face, mode: 'custom' },
-            );
-          }
-          onChange({ ...face, mode: 'preset', preset: next as MaterialPresetKey });
-        }}
-      >
-        {allowNone && <option value="none">None</option>}
-        {materialPresetKeys.map((key) => (
-          <option key={key} value={key}>
-            {materialPresetLabels[key]}
-          </option>
-        ))}
-        <option value="custom">Custom</option>
-      </CellSelect>
-    </div>
-  );
-}
-
-const fractionFields = [
-  ['absorbed', 'absorbed'],
-  ['specular', 'specular'],
-  ['diffuse', 'diffuse'],
-  ['emissivityFront', 'ε front'],
-  ['emissivityBack', 'ε back'],
-] as const;
-
 function FractionInputs({
   n,
   faceName,
@@ -438,39 +359,23 @@ function FractionInputs({
   readOnly: boolean;
   state: (subpath: string, ...groups: string[]) => { invalid: boolean; describedBy: string | undefined };
   visit: (subpath: string) => () => void;
-  onChange: (key: (typeof fractionFields)[number][0], value: string) => void;
+  onChange: (key: FractionKey, value: string) => void;
 }) {
-  const sum = parseNumber(face.absorbed) + parseNumber(face.specular) + parseNumber(face.diffuse);
   return (
     <fieldset className="flex flex-col gap-1">
       <legend className="text-xs font-medium text-ink-soft">
-        {faceName === 'front' ? 'Front' : 'Back'} fractions{' '}
-        <span className="font-mono font-normal">(sum {Number.isFinite(sum) ? formatNumber(sum, 4) : '—'}; ε optional)</span>
+        {faceName === 'front' ? 'Front' : 'Back'} fractions <span className="font-mono font-normal">{fractionSumText(face)}</span>
       </legend>
-      <div className="flex flex-wrap items-center gap-1.5">
-        {fractionFields.map(([key, short]) => {
-          const isEmissivity = key === 'emissivityFront' || key === 'emissivityBack';
-          const label = isEmissivity
-            ? `Plate ${n} ${faceName} emissivity ${key === 'emissivityFront' ? 'front' : 'back'}`
-            : `Plate ${n} ${faceName} ${key} fraction`;
-          return (
-            <label key={key} className="flex items-center gap-1">
-              <span aria-hidden="true" className="text-xs text-ink-soft">
-                {short}
-              </span>
-              <CellInput
-                label={label}
-                value={face[key]}
-                onChange={(v) => onChange(key, v)}
-                onBlur={visit(`${faceName}.${key}`)}
-                readOnly={readOnly}
-                className="w-[3.75rem]"
-                {...(isEmissivity ? state(`${faceName}.${key}`) : state(`${faceName}.${key}`, faceName))}
-              />
-            </label>
-          );
-        })}
-      </div>
+      <FractionCells
+        face={face}
+        readOnly={readOnly}
+        labelOf={(key, isEmissivity) =>
+          isEmissivity ? `Plate ${n} ${faceName} emissivity ${key === 'emissivityFront' ? 'front' : 'back'}` : `Plate ${n} ${faceName} ${key} fraction`
+        }
+        stateOf={(key, isEmissivity) => (isEmissivity ? state(`${faceName}.${key}`) : state(`${faceName}.${key}`, faceName))}
+        onVisit={(key) => visit(`${faceName}.${key}`)()}
+        onChange={onChange}
+      />
     </fieldset>
   );
 }
