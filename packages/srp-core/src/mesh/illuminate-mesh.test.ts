@@ -3,12 +3,11 @@ import type { Vec3 } from '../math/vec3';
 import { compileVehicle } from '../vehicles/compile-vehicle';
 import { createSrpResult, evaluateSrp } from '../vehicles/evaluate-srp';
 import type { SurfaceOptics } from '../vehicles/surface-optics';
-import type { PlateSpec } from '../vehicles/vehicle-spec';
 import { srpErrorFor } from '../vehicles/vehicle-test-helpers';
 import { tableNodeDirection } from './coefficient-table';
 import { createMeshIllumination, illuminateMesh, samplePattern } from './illuminate-mesh';
 import { createMeshScene } from './mesh-scene';
-import { boxWingMesh, MeshBuilder } from './mesh-test-helpers';
+import { boxPlates, boxWingMesh, MeshBuilder } from './mesh-test-helpers';
 
 const DEG = Math.PI / 180;
 /** Optics with every term of the flat-plate formula: specular, diffuse and thermal re-emission. */
@@ -20,29 +19,10 @@ const boxMin: Vec3 = [-0.4, -0.9, 0.2];
 const boxMax: Vec3 = [1.6, 0.6, 3.2];
 const com: Vec3 = [0.3, -0.1, 1.1];
 
-/** The six faces of the box as one-sided plates (the flat-plate model the mesh must reproduce). */
-function boxPlates(): PlateSpec[] {
-  const [x0, y0, z0] = boxMin;
-  const [x1, y1, z1] = boxMax;
-  const c: Vec3 = [(x0 + x1) / 2, (y0 + y1) / 2, (z0 + z1) / 2];
-  const ax = (y1 - y0) * (z1 - z0);
-  const ay = (x1 - x0) * (z1 - z0);
-  const az = (x1 - x0) * (y1 - y0);
-  const plate = (name: string, areaM2: number, normal: Vec3, centroidM: Vec3): PlateSpec => ({ name, areaM2, normal, centroidM, front: mixed });
-  return [
-    plate('+x', ax, [1, 0, 0], [x1, c[1], c[2]]),
-    plate('-x', ax, [-1, 0, 0], [x0, c[1], c[2]]),
-    plate('+y', ay, [0, 1, 0], [c[0], y1, c[2]]),
-    plate('-y', ay, [0, -1, 0], [c[0], y0, c[2]]),
-    plate('+z', az, [0, 0, 1], [c[0], c[1], z1]),
-    plate('-z', az, [0, 0, -1], [c[0], c[1], z0]),
-  ];
-}
-
 describe('illuminateMesh: a convex box is exactly the flat-plate model of its faces (issue 8 item 4)', () => {
   // Source of the expected values: evaluateSrp on the 6-plate vehicle (Montenbruck & Gill 2000,
   // §3.4, flat plates each at its centroid); nothing shades on a convex body.
-  const plates = compileVehicle({ kind: 'plates', name: 'box', massKg: 100, centreOfMassM: com, plates: boxPlates() });
+  const plates = compileVehicle({ kind: 'plates', name: 'box', massKg: 100, centreOfMassM: com, plates: boxPlates(boxMin, boxMax, mixed) });
   const plateResult = createSrpResult(plates);
   const cases = [
     { label: '12 triangles, 1 sample, pre-pass on', k: 1, samples: 1, prePass: true, bounce: false },

@@ -3,7 +3,9 @@
  * a box-wing spacecraft with an antenna dish that shades part of its bus. All counter-clockwise
  * seen from outside (front normal outward).
  */
-import type { ReadonlyVec3 } from '../math/vec3';
+import type { ReadonlyVec3, Vec3 } from '../math/vec3';
+import type { PlateSpec } from '../vehicles/vehicle-spec';
+import type { SurfaceOpticsInput } from '../vehicles/plate-optics';
 import type { TriangleMesh } from './mesh-types';
 
 /** A mesh being assembled: triangles with a group name each. */
@@ -123,4 +125,23 @@ export function boxWingMesh(detail: BoxWingDetail): TriangleMesh {
   // A strut holding the dish off the +x face.
   b.box('boom', [1, -0.05, 0.15], [1.35, 0.05, 0.25], 1);
   return b.mesh();
+}
+
+/** The six faces of an axis-aligned box as one-sided plates with `front` optics: the flat-plate model a box mesh must reproduce. */
+export function boxPlates(boxMin: Vec3, boxMax: Vec3, front: SurfaceOpticsInput): PlateSpec[] {
+  const [x0, y0, z0] = boxMin;
+  const [x1, y1, z1] = boxMax;
+  const c: Vec3 = [(x0 + x1) / 2, (y0 + y1) / 2, (z0 + z1) / 2];
+  const ax = (y1 - y0) * (z1 - z0);
+  const ay = (x1 - x0) * (z1 - z0);
+  const az = (x1 - x0) * (y1 - y0);
+  const plate = (name: string, areaM2: number, normal: Vec3, centroidM: Vec3): PlateSpec => ({ name, areaM2, normal, centroidM, front });
+  return [
+    plate('+x', ax, [1, 0, 0], [x1, c[1], c[2]]),
+    plate('-x', ax, [-1, 0, 0], [x0, c[1], c[2]]),
+    plate('+y', ay, [0, 1, 0], [c[0], y1, c[2]]),
+    plate('-y', ay, [0, -1, 0], [c[0], y0, c[2]]),
+    plate('+z', az, [0, 0, 1], [c[0], c[1], z1]),
+    plate('-z', az, [0, 0, -1], [c[0], c[1], z0]),
+  ];
 }

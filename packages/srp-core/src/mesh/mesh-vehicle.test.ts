@@ -10,37 +10,19 @@ import { propagate, type PropagationResult } from '../propagation/propagate';
 import { compileVehicle } from '../vehicles/compile-vehicle';
 import { createSrpResult, evaluateSrp } from '../vehicles/evaluate-srp';
 import type { SurfaceOptics } from '../vehicles/surface-optics';
-import type { MeshTableSpec, PlateSpec, PlateVehicleSpec } from '../vehicles/vehicle-spec';
+import type { MeshTableSpec, PlateVehicleSpec } from '../vehicles/vehicle-spec';
 import { srpErrorFor } from '../vehicles/vehicle-test-helpers';
 import { computeCoefficientTable, interpolateCoefficientTable } from './coefficient-table';
 import { createMeshIllumination, illuminateMesh } from './illuminate-mesh';
 import { createMeshScene } from './mesh-scene';
-import { MeshBuilder } from './mesh-test-helpers';
+import { boxPlates, MeshBuilder } from './mesh-test-helpers';
 
 const optics: SurfaceOptics = { absorbed: 0.6, specular: 0.25, diffuse: 0.15, emissivityFront: 0.7, emissivityBack: 0.3 };
 const boxMin: Vec3 = [-1, -1.1, 0];
 const boxMax: Vec3 = [1.2, 1.1, 3];
 const com: Vec3 = [0.08, -0.03, 1.4];
 
-function boxPlates(): PlateSpec[] {
-  const [x0, y0, z0] = boxMin;
-  const [x1, y1, z1] = boxMax;
-  const c: Vec3 = [(x0 + x1) / 2, (y0 + y1) / 2, (z0 + z1) / 2];
-  const ax = (y1 - y0) * (z1 - z0);
-  const ay = (x1 - x0) * (z1 - z0);
-  const az = (x1 - x0) * (y1 - y0);
-  const plate = (name: string, areaM2: number, normal: Vec3, centroidM: Vec3): PlateSpec => ({ name, areaM2, normal, centroidM, front: optics });
-  return [
-    plate('+x', ax, [1, 0, 0], [x1, c[1], c[2]]),
-    plate('-x', ax, [-1, 0, 0], [x0, c[1], c[2]]),
-    plate('+y', ay, [0, 1, 0], [c[0], y1, c[2]]),
-    plate('-y', ay, [0, -1, 0], [c[0], y0, c[2]]),
-    plate('+z', az, [0, 0, 1], [c[0], c[1], z1]),
-    plate('-z', az, [0, 0, -1], [c[0], c[1], z0]),
-  ];
-}
-
-const plateSpec: PlateVehicleSpec = { kind: 'plates', name: 'box', massKg: 1800, centreOfMassM: com, plates: boxPlates() };
+const plateSpec: PlateVehicleSpec = { kind: 'plates', name: 'box', massKg: 1800, centreOfMassM: com, plates: boxPlates(boxMin, boxMax, optics) };
 const scene = createMeshScene(new MeshBuilder().box('bus', boxMin, boxMax, 3).mesh(), { default: { front: optics } });
 const tableSettings = (stepDeg: number) => ({ stepDeg, samplesPerFacet: 1, specularBounce: false });
 const table5 = computeCoefficientTable(scene, tableSettings(5));
