@@ -323,8 +323,33 @@ function traverse(bvh: MeshBvh, ray: MeshRay, skipRow: number, firstHit: boolean
       const first = nodes[2 * node]!;
       for (let r = first, end = first + count; r < end; r += 1) {
         if (r === skipRow) continue;
-        const t = rowHitDistance(tri, ray, r);
-        if (t < tMax) {
+        // Möller–Trumbore written out (as in rowHitDistance): a call per triangle here measured
+        // about 30 % slower on the table bench (V8 does not inline it into this loop).
+        const q = 9 * r;
+        const e1x = tri[q + 3]!;
+        const e1y = tri[q + 4]!;
+        const e1z = tri[q + 5]!;
+        const e2x = tri[q + 6]!;
+        const e2y = tri[q + 7]!;
+        const e2z = tri[q + 8]!;
+        const px = dy * e2z - dz * e2y;
+        const py = dz * e2x - dx * e2z;
+        const pz = dx * e2y - dy * e2x;
+        const det = e1x * px + e1y * py + e1z * pz;
+        if (det === 0) continue;
+        const inv = 1 / det;
+        const tx = ox - tri[q]!;
+        const ty = oy - tri[q + 1]!;
+        const tz = oz - tri[q + 2]!;
+        const u = (tx * px + ty * py + tz * pz) * inv;
+        if (u < 0 || u > 1) continue;
+        const qx = ty * e1z - tz * e1y;
+        const qy = tz * e1x - tx * e1z;
+        const qz = tx * e1y - ty * e1x;
+        const v = (dx * qx + dy * qy + dz * qz) * inv;
+        if (v < 0 || u + v > 1) continue;
+        const t = (e2x * qx + e2y * qy + e2z * qz) * inv;
+        if (t > 0 && t < tMax) {
           if (firstHit) {
             ray[8] = r;
             return r;
